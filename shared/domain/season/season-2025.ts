@@ -91,7 +91,7 @@ export const season2025: SeasonProfile = {
     red: {
       centre: cite(FL_DERIVED, { xM: 13.058902, yM: 4.0259 }),
       tagIdsCcw: cite(FL_DERIVED, [7, 8, 9, 10, 11, 6]),
-      centreToFaceM: cite(FL_DERIVED, 0.8317),
+      centreToFaceM: cite(FL_DERIVED, 0.8316),
     },
   },
   reef: {
