@@ -43,6 +43,7 @@ export const resetConfirmBodySchema = z.object({
   token: z.string().min(20).max(200),
   password: passwordSchema,
 });
+export type ResetConfirmBody = z.infer<typeof resetConfirmBodySchema>;
 
 export const userSchema = z.object({ id: z.string().uuid(), email: z.string(), name: z.string() });
 export type User = z.infer<typeof userSchema>;

@@ -1,0 +1,78 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import cookieParser from 'cookie-parser';
+import express, { type Express } from 'express';
+import type { Db } from './db/client';
+import { authStore } from './features/auth/auth.repo';
+import { authRouter, DEFAULT_SIGN_IN_LIMIT, type SignInLimit } from './features/auth/auth.routes';
+import { createAuthService } from './features/auth/auth.service';
+import { checkCsrf, loadSession, type CookiePolicy } from './features/auth/session.middleware';
+import { createSessionTokens } from './features/auth/session-token';
+import { healthRouter } from './features/health/health.routes';
+import type { DevInbox } from './features/mail/fake-smtp';
+import type { Mailer } from './features/mail/mailer';
+import { teamStore } from './features/team/team.repo';
+import { teamRouter } from './features/team/team.routes';
+import { createTeamService } from './features/team/team.service';
+import { AppError, errorHandler } from './lib/errors';
+import type { Logger } from './lib/logger';
+
+export interface AppDeps {
+  db: Db;
+  logger: Logger;
+  mailer: Mailer;
+  tokenSecret: string;
+  /** Where links in mails point, e.g. http://127.0.0.1:5810 */
+  publicUrl: string;
+  cookies?: CookiePolicy;
+  /** Present when the local fake SMTP server catches the mail: enables /api/dev/mails. */
+  devInbox?: DevInbox;
+  /** The built client (dist/client); served with a fallback to index.html when it exists. */
+  clientDir?: string;
+  signInLimit?: SignInLimit;
+  now?: () => Date;
+}
+
+export interface App {
+  express: Express;
+  services: {
+    auth: ReturnType<typeof createAuthService>;
+    team: ReturnType<typeof createTeamService>;
+  };
+}
+
+/** Builds the HTTP application; listening and shutdown live in server/bin. */
+export function createApp(deps: AppDeps): App {
+  const now = deps.now ?? (() => new Date());
+  const cookies = deps.cookies ?? { secure: false };
+  const tokens = createSessionTokens(deps.tokenSecret, now);
+  const common = { mailer: deps.mailer, publicUrl: deps.publicUrl, logger: deps.logger, now };
+  const auth = createAuthService({ store: authStore(deps.db), ...common });
+  const team = createTeamService({ store: teamStore(deps.db), ...common });
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  const api = express.Router();
+  api.use(express.json({ limit: '256kb' }));
+  api.use(cookieParser());
+  api.use(checkCsrf);
+  api.use(loadSession(tokens, auth));
+  api.use(healthRouter({ db: deps.db, devInbox: deps.devInbox }));
+  api.use(authRouter({ auth, tokens, cookies, signInLimit: deps.signInLimit ?? DEFAULT_SIGN_IN_LIMIT }));
+  api.use(teamRouter({ team, auth, tokens, cookies }));
+  api.use(() => {
+    throw new AppError('not_found', 'No such API route');
+  });
+  app.use('/api', api);
+
+  if (deps.clientDir && existsSync(path.join(deps.clientDir, 'index.html'))) {
+    const clientDir = deps.clientDir;
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+  app.use(errorHandler(deps.logger));
+
+  return { express: app, services: { auth, team } };
+}
