@@ -1,0 +1,28 @@
+// `npm run bench`: benchmarks on a throw-away database of the embedded cluster (or DATABASE_URL's server).
+import pg from 'pg';
+import { benchAuth } from '../bench/auth.bench';
+import { formatResults } from '../bench/bench-kit';
+import { connectDb } from '../db/client';
+import { withDatabase } from '../db/embedded-postgres';
+import { runMigrations } from '../db/migrate';
+import { readEnv } from '../env';
+import { createLogger } from '../lib/logger';
+import { provideDatabase } from '../runtime';
+
+const env = readEnv();
+const database = await provideDatabase(env, createLogger('warn'));
+const name = `pitwall_bench_${process.pid}`;
+const admin = new pg.Client({ connectionString: database.url });
+await admin.connect();
+await admin.query(`create database ${name}`);
+const handle = connectDb(withDatabase(database.url, name));
+try {
+  await runMigrations(handle.db);
+  process.stdout.write('Pitwall benchmarks (each figure per call; ratios against the baseline of this run)\n\n');
+  process.stdout.write(`auth and sessions\n${formatResults(await benchAuth(handle.db))}\n`);
+} finally {
+  await handle.close();
+  await admin.query(`drop database if exists ${name} with (force)`);
+  await admin.end();
+  await database.stop();
+}
