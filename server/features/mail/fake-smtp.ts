@@ -23,7 +23,7 @@ export interface FakeSmtp {
 }
 
 export function extractLinks(text: string): string[] {
-  return [...new Set(text.match(LINK) ?? [])];
+  return [...new Set((text.match(LINK) ?? []).map((link) => link.replace(/[.,;:!?]+$/, '')))];
 }
 
 export async function startFakeSmtp(port = 0, host = '127.0.0.1'): Promise<FakeSmtp> {
