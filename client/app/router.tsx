@@ -1,0 +1,41 @@
+import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { FullPageLoading } from './full-page-loading';
+import { RouteError } from './route-error';
+
+const router = createBrowserRouter([
+  {
+    ErrorBoundary: RouteError,
+    HydrateFallback: FullPageLoading,
+    children: [
+      {
+        lazy: () => import('./routes/auth-layout'),
+        children: [
+          { path: 'sign-in', lazy: () => import('./routes/sign-in') },
+          { path: 'sign-up', lazy: () => import('./routes/sign-up') },
+          { path: 'forgot', lazy: () => import('./routes/forgot') },
+          { path: 'reset', lazy: () => import('./routes/reset') },
+          { path: 'invite/:token', lazy: () => import('./routes/invite') },
+        ],
+      },
+      { path: 'dev/inbox', lazy: () => import('./routes/dev-inbox') },
+      {
+        path: '/',
+        lazy: () => import('./routes/app-frame'),
+        children: [
+          { index: true, lazy: () => import('./routes/home') },
+          { path: 'panels', lazy: () => import('./routes/panels') },
+          { path: 'live', lazy: () => import('./routes/live') },
+          { path: 'recordings', lazy: () => import('./routes/recordings') },
+          { path: 'cycles', lazy: () => import('./routes/cycles') },
+          { path: 'drills', lazy: () => import('./routes/drills') },
+          { path: 'settings/team', lazy: () => import('./routes/team-settings') },
+          { path: '*', lazy: () => import('./routes/not-found') },
+        ],
+      },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

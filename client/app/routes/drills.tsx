@@ -1,0 +1,5 @@
+import { AreaPlaceholder } from '../area-placeholder';
+
+export function Component() {
+  return <AreaPlaceholder id="drills" />;
+}

@@ -1,0 +1,10 @@
+import { AreaPlaceholder } from '../area-placeholder';
+import { SafetyCaution } from '../safety-caution';
+
+export function Component() {
+  return (
+    <AreaPlaceholder id="live">
+      <SafetyCaution />
+    </AreaPlaceholder>
+  );
+}
