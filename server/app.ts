@@ -11,6 +11,9 @@ import { createSessionTokens } from './features/auth/session-token';
 import { healthRouter } from './features/health/health.routes';
 import type { DevInbox } from './features/mail/fake-smtp';
 import type { Mailer } from './features/mail/mailer';
+import { robotProfileRepo } from './features/season/robot-profile.repo';
+import { seasonRouter } from './features/season/season.routes';
+import { createSeasonService } from './features/season/season.service';
 import { teamStore } from './features/team/team.repo';
 import { teamRouter } from './features/team/team.routes';
 import { createTeamService } from './features/team/team.service';
@@ -38,6 +41,7 @@ export interface App {
   services: {
     auth: ReturnType<typeof createAuthService>;
     team: ReturnType<typeof createTeamService>;
+    season: ReturnType<typeof createSeasonService>;
   };
 }
 
@@ -49,6 +53,7 @@ export function createApp(deps: AppDeps): App {
   const common = { mailer: deps.mailer, publicUrl: deps.publicUrl, logger: deps.logger, now };
   const auth = createAuthService({ store: authStore(deps.db), ...common });
   const team = createTeamService({ store: teamStore(deps.db), ...common });
+  const season = createSeasonService({ profiles: robotProfileRepo(deps.db) });
 
   const app = express();
   app.disable('x-powered-by');
@@ -62,6 +67,7 @@ export function createApp(deps: AppDeps): App {
   api.use(healthRouter({ db: deps.db, devInbox: deps.devInbox }));
   api.use(authRouter({ auth, tokens, cookies, signInLimit: deps.signInLimit ?? DEFAULT_SIGN_IN_LIMIT }));
   api.use(teamRouter({ team, auth, tokens, cookies }));
+  api.use(seasonRouter({ season }));
   api.use(() => {
     throw new AppError('not_found', 'No such API route');
   });
@@ -74,5 +80,5 @@ export function createApp(deps: AppDeps): App {
   }
   app.use(errorHandler(deps.logger));
 
-  return { express: app, services: { auth, team } };
+  return { express: app, services: { auth, team, season } };
 }

@@ -4,7 +4,11 @@ import { runMigrations } from '../db/migrate';
 import { authStore } from '../features/auth/auth.repo';
 import { seedDemo } from '../features/demo/seed';
 import { createLogger } from '../lib/logger';
+import { robotProfileRepo } from '../features/season/robot-profile.repo';
+import { createSeasonService } from '../features/season/season.service';
 import { teamStore } from '../features/team/team.repo';
+import type { BranchTargets } from '../../shared/domain/season/targets';
+import { targetsQuerySchema } from '../../shared/schemas/season';
 import { createTeamService } from '../features/team/team.service';
 import { readEnv } from '../env';
 import { provideDatabase } from '../runtime';
@@ -12,7 +16,16 @@ import { provideDatabase } from '../runtime';
 interface Command {
   summary: string;
   usage: string;
-  run(args: Map<string, string>, db: Db): Promise<void>;
+  /** Whether the command opens the database; `targets` with --depth and --side does not. */
+  needsDb(args: Map<string, string>): boolean;
+  run(args: Map<string, string>, db: Db | undefined): Promise<void>;
+}
+
+const always = () => true;
+
+function requireDb(db: Db | undefined): Db {
+  if (!db) throw new Error('this command needs the database');
+  return db;
 }
 
 function parseFlags(argv: string[]): Map<string, string> {
@@ -32,15 +45,18 @@ const COMMANDS: Record<string, Command> = {
   seed: {
     summary: 'add the demo team (idempotent)',
     usage: 'seed',
+    needsDb: always,
     async run(_args, db) {
-      const { created } = await seedDemo(db);
+      const { created } = await seedDemo(requireDb(db));
       process.stdout.write(`demo data: ${created ? `added ${created} rows` : 'already there'}\n`);
     },
   },
   'robot-key': {
     summary: "create a robot key for a team's first lead and print its secret once",
     usage: 'robot-key --team 19850 --name Gullwing',
-    async run(args, db) {
+    needsDb: always,
+    async run(args, maybeDb) {
+      const db = requireDb(maybeDb);
       const number = Number(args.get('team'));
       const name = args.get('name') ?? 'robot';
       const team = await authStore(db).findTeamByNumber(number);
@@ -60,7 +76,34 @@ const COMMANDS: Record<string, Command> = {
       process.stdout.write(`${key.name} (${key.prefix}): ${secret}\n`);
     },
   },
+  targets: {
+    summary: 'the 12 branch targets of an alliance (a team\'s robot profile, or --depth/--side)',
+    usage: 'targets --alliance red [--depth 0.45] [--side left] [--team 19850] [--json]',
+    needsDb: (args) => !(args.has('depth') && args.has('side')),
+    async run(args, db) {
+      const query = targetsQuerySchema.parse({ alliance: args.get('alliance'), depth: args.get('depth'), side: args.get('side') });
+      const teamNumber = args.has('team') ? Number(args.get('team')) : undefined;
+      const teamId = db && teamNumber !== undefined ? (await authStore(db).findTeamByNumber(teamNumber))?.id : undefined;
+      if (teamNumber !== undefined && !teamId) throw new Error(`no team ${args.get('team')}`);
+      const profiles = db ? robotProfileRepo(db) : { find: async () => undefined, save: async () => {} };
+      const result = await createSeasonService({ profiles }).targets(teamId ?? '00000000-0000-4000-8000-000000000000', query);
+      if (args.has('json')) {
+        process.stdout.write(`${JSON.stringify(result, null, 2)}\n`);
+        return;
+      }
+      process.stdout.write(`${formatTargets(result)}\n`);
+    },
+  },
 };
+
+function formatTargets(result: BranchTargets): string {
+  const head = `${result.alliance} reef, scoring side ${result.side}, ${result.depthM.toFixed(3)} m from face to robot centre`;
+  const rows = result.targets.map(
+    (t) =>
+      `  ${t.branch}  ${t.face}  tag ${String(t.tagId).padStart(2)}  x ${t.x.toFixed(3).padStart(7)} m  y ${t.y.toFixed(3).padStart(6)} m  heading ${t.headingDeg.toFixed(1).padStart(6)}°`,
+  );
+  return [head, ...rows].join('\n');
+}
 
 function help(): void {
   const lines = Object.entries(COMMANDS).map(([, c]) => `  npm run cli -- ${c.usage.padEnd(44)} ${c.summary}`);
@@ -75,13 +118,18 @@ async function main(): Promise<void> {
     process.exitCode = name && name !== 'help' ? 2 : 0;
     return;
   }
+  const flags = parseFlags(rest);
+  if (!command.needsDb(flags)) {
+    await command.run(flags, undefined);
+    return;
+  }
   const env = readEnv();
   const logger = createLogger('warn');
   const database = await provideDatabase(env, logger);
   const handle = connectDb(database.url);
   try {
     await runMigrations(handle.db);
-    await command.run(parseFlags(rest), handle.db);
+    await command.run(flags, handle.db);
   } finally {
     await handle.close();
     await database.stop();

@@ -9,6 +9,7 @@ const BRIEF: [TeamAction, Role[]][] = [
   ['robotKeys.manage', ['lead']],
   ['recordings.delete', ['lead']],
   ['panels.edit', ['lead', 'programmer']],
+  ['robotProfile.edit', ['lead', 'programmer']],
   ['recordings.manage', ['lead', 'programmer']],
   ['panels.run', ['lead', 'programmer', 'operator']],
   ['notes.write', ['lead', 'programmer', 'coach']],

@@ -28,6 +28,7 @@ export type TeamAction =
   | 'members.manage'
   | 'invites.manage'
   | 'robotKeys.manage'
+  | 'robotProfile.edit'
   | 'panels.edit'
   | 'panels.run'
   | 'recordings.manage'
@@ -41,6 +42,7 @@ const ALLOWED: Record<TeamAction, readonly Role[]> = {
   'members.manage': ['lead'],
   'invites.manage': ['lead'],
   'robotKeys.manage': ['lead'],
+  'robotProfile.edit': ['lead', 'programmer'],
   'panels.edit': ['lead', 'programmer'],
   'panels.run': ['lead', 'programmer', 'operator'],
   'recordings.manage': ['lead', 'programmer'],
