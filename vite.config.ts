@@ -26,7 +26,13 @@ export default defineConfig({
         test: {
           name: 'unit',
           root: '.',
-          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'simulator/**/*.test.ts', 'client/**/*.test.ts'],
+          include: [
+            'shared/**/*.test.ts',
+            'server/**/*.test.ts',
+            'simulator/**/*.test.ts',
+            'client/**/*.test.ts',
+            'tests/reference/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },
