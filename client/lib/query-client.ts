@@ -1,8 +1,8 @@
-import { QueryCache, QueryClient } from '@tanstack/react-query';
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { isApiError, isUnauthenticated } from './api-error';
 
 export type QueryClientDeps = {
-  /** Called when any query learns the session is gone (401), so the app can send the user to sign in. */
+  /** Called when any query or mutation learns the session is gone (401), so the app can send the user to sign in. */
   onUnauthenticated: (queryKey: readonly unknown[]) => void;
 };
 
@@ -17,6 +17,11 @@ export function createQueryClient({ onUnauthenticated }: QueryClientDeps): Query
     queryCache: new QueryCache({
       onError: (error, query) => {
         if (isUnauthenticated(error)) onUnauthenticated(query.queryKey);
+      },
+    }),
+    mutationCache: new MutationCache({
+      onError: (error, _variables, _context, mutation) => {
+        if (isUnauthenticated(error)) onUnauthenticated(mutation.options.mutationKey ?? []);
       },
     }),
     defaultOptions: {

@@ -91,8 +91,8 @@ export function Component() {
           <div className="flex min-h-16 items-center justify-between gap-4 px-4 lg:px-8">
             <div className="flex min-w-0 items-center gap-3 lg:hidden">
               <Logo />
-              <span className="num truncate text-sm text-asphalt-300">
-                {me.data.team.number} · {me.data.team.name}
+              <span className="truncate text-sm text-asphalt-300">
+                <span className="num text-signal-300">{me.data.team.number}</span> {me.data.team.name}
               </span>
             </div>
             <div className="hidden lg:block" />

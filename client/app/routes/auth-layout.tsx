@@ -10,9 +10,9 @@ const POINTS = [
 export function Component() {
   return (
     <div className="grid min-h-dvh lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
-      <aside className="relative hidden overflow-hidden border-r border-asphalt-800 bg-asphalt-900 p-10 lg:flex lg:flex-col">
+      <aside className="relative hidden overflow-hidden border-r border-asphalt-800 bg-asphalt-900 p-10 lg:sticky lg:top-0 lg:flex lg:h-dvh lg:flex-col">
         <Logo />
-        <div className="mt-auto mb-auto max-w-md pt-10">
+        <div className="relative my-auto max-w-md pt-10">
           <p className="text-xs font-semibold tracking-[0.18em] text-signal-400 uppercase">For the software subteam</p>
           <p className="mt-3 text-[2.5rem] leading-[1.1] font-bold text-asphalt-100">
             From the operator’s tap to the replay in the pit.
@@ -32,7 +32,7 @@ export function Component() {
         <svg
           aria-hidden="true"
           viewBox="0 0 400 400"
-          className="pointer-events-none absolute -right-24 -bottom-24 size-[26rem] text-asphalt-800"
+          className="pointer-events-none absolute -right-36 -bottom-36 size-[24rem] text-asphalt-800"
         >
           <g fill="none" stroke="currentColor" strokeWidth="2">
             <polygon points="200,40 338,120 338,280 200,360 62,280 62,120" />

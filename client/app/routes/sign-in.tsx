@@ -31,7 +31,7 @@ export function Component() {
     >
       {params.has('next') && (
         <Notice tone="info" className="mb-4">
-          Your session ended. Sign in to carry on where you were.
+          Sign in to continue. You’ll go straight back to the page you were on.
         </Notice>
       )}
       <SignInForm onSignedIn={() => navigate(next, { replace: true })} />

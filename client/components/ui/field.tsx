@@ -12,7 +12,8 @@ type FieldProps = {
 /** Label, control, hint and error, wired together by ids so assistive tech reads them as one. */
 export function Field({ label, hint, error, children }: FieldProps) {
   const id = useId();
-  const hintId = hint ? `${id}-hint` : undefined;
+  // The error replaces the hint: both at once mostly say the same thing twice.
+  const hintId = hint && !error ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;
   const describedBy = [errorId, hintId].filter(Boolean).join(' ') || undefined;
   return (
@@ -30,7 +31,7 @@ export function Field({ label, hint, error, children }: FieldProps) {
           {error}
         </p>
       )}
-      {hint && (
+      {hintId && (
         <p id={hintId} className="text-sm text-asphalt-400">
           {hint}
         </p>

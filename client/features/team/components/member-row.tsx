@@ -34,7 +34,9 @@ export function MemberRow({ member, isYou, isManager, pendingRole, isLastLead, c
         {isManager ? (
           <div className="relative w-44">
             <select
-              aria-label={`Role for ${member.name}`}
+              // Named by the member alone: the column header already says "Role", and the invite
+              // form's "Role" select must stay the only control of that name on the page.
+              aria-label={member.name}
               aria-describedby={isLastLead ? noteId : undefined}
               value={pendingRole ?? member.role}
               disabled={pendingRole !== null || isLastLead}
