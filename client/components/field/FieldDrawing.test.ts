@@ -1,0 +1,70 @@
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
+import { describe, expect, it } from 'vitest';
+import { season2025 } from '../../../shared/domain/season/season-2025';
+import * as mod from './FieldDrawing';
+import { ALLIANCE_COLOURS, FieldDrawing, type FieldLayer } from './FieldDrawing';
+
+const render = (layers: FieldLayer[] = []) => renderToStaticMarkup(createElement(FieldDrawing, { season: season2025, layers }));
+const count = (html: string, needle: string) => html.split(needle).length - 1;
+
+describe('FieldDrawing', () => {
+  it('uses a metre viewBox around the 17.548 × 8.052 m field with y negated', () => {
+    // Default 0.3 m margin: −0.3, −(8.052 + 0.3), 17.548 + 0.6, 8.052 + 0.6.
+    const html = render();
+    const viewBox = /viewBox="([^"]+)"/.exec(html)?.[1]?.split(' ').map(Number) ?? [];
+    expect(viewBox[0]).toBeCloseTo(-0.3, 9);
+    expect(viewBox[1]).toBeCloseTo(-8.352, 9);
+    expect(viewBox[2]).toBeCloseTo(18.148, 9);
+    expect(viewBox[3]).toBeCloseTo(8.652, 9);
+    expect(html).toContain('scale(1 -1)');
+  });
+
+  it('names itself for assistive technology', () => {
+    expect(render()).toContain('aria-label="Field map"');
+  });
+
+  it('letters all 24 branches on the two reefs', () => {
+    const html = render();
+    expect(count(html, 'data-element="reef"')).toBe(2);
+    expect(count(html, 'data-branch=')).toBe(24);
+    for (const letter of 'ABCDEFGHIJKL') expect(count(html, `data-branch="${letter}"`)).toBe(2);
+  });
+
+  it('draws four coral stations, two processors, the barge, six cages and two starting lines', () => {
+    const html = render();
+    expect(count(html, 'data-element="coral-station"')).toBe(4);
+    expect(count(html, 'data-element="processor"')).toBe(2);
+    expect(count(html, 'data-element="barge"')).toBe(1);
+    expect(count(html, 'data-element="cage"')).toBe(6);
+    expect(count(html, 'data-element="starting-line"')).toBe(2);
+  });
+
+  // Okabe & Ito, "Color Universal Design" (2008): vermilion #D55E00 and blue #0072B2.
+  it('colours the alliances with the Okabe–Ito vermilion and blue', () => {
+    expect(ALLIANCE_COLOURS).toEqual({ red: '#D55E00', blue: '#0072B2' });
+    const html = render();
+    expect(html).toContain('#D55E00');
+    expect(html).toContain('#0072B2');
+  });
+
+  it('draws robot, trail and target layers in order', () => {
+    const html = render([
+      { kind: 'trail', id: 't', points: [{ xM: 1, yM: 1 }, { xM: 2, yM: 1.5 }], colour: '#009E73' },
+      { kind: 'robot', id: 'gullwing', xM: 2, yM: 1.5, headingDeg: 90, widthM: 0.6, lengthM: 0.8, colour: '#0072B2' },
+      { kind: 'target', id: 'A', xM: 3.1576, yM: 4.191, headingDeg: 0, colour: '#000000', label: 'A' },
+    ]);
+    expect(html).toContain('points="1,1 2,1.5"');
+    const trailAt = html.indexOf('data-layer="trail"');
+    const robotAt = html.indexOf('data-layer="robot"');
+    const targetAt = html.indexOf('data-layer="target"');
+    expect(trailAt).toBeGreaterThan(0);
+    expect(robotAt).toBeGreaterThan(trailAt);
+    expect(targetAt).toBeGreaterThan(robotAt);
+    expect(html).toContain('translate(3.1576 4.191) rotate(0)');
+  });
+
+  it('has only named exports', () => {
+    expect('default' in mod).toBe(false);
+  });
+});

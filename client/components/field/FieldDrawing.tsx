@@ -1,0 +1,208 @@
+import { robotFootprint } from '../../../shared/domain/geometry/footprint';
+import type { Point2d } from '../../../shared/domain/geometry/pose2d';
+import { fieldPlan } from '../../../shared/domain/season/field-plan';
+import type { Alliance, SeasonProfile } from '../../../shared/domain/season/season-profile';
+
+/** Okabe–Ito colour-blind-safe palette: vermilion for red, blue for blue. */
+export const ALLIANCE_COLOURS: Record<Alliance, string> = { red: '#D55E00', blue: '#0072B2' };
+
+const INK = '#1F2328';
+const SURFACE = '#F3F2EE';
+const STRUCTURE = '#8C8C86';
+const LINE_M = 0.03;
+const LETTER_M = 0.13;
+const TARGET_RADIUS_M = 0.12;
+
+export type RobotLayer = {
+  kind: 'robot';
+  id: string;
+  xM: number;
+  yM: number;
+  headingDeg: number;
+  widthM: number;
+  lengthM: number;
+  colour: string;
+};
+export type TrailLayer = { kind: 'trail'; id: string; points: Point2d[]; colour: string };
+export type TargetLayer = {
+  kind: 'target';
+  id: string;
+  xM: number;
+  yM: number;
+  /** Draws a tick toward this heading when given. */
+  headingDeg?: number;
+  colour: string;
+  label?: string;
+};
+export type FieldLayer = RobotLayer | TrailLayer | TargetLayer;
+
+export type FieldDrawingProps = {
+  season: SeasonProfile;
+  /** Drawn in order, on top of the field. */
+  layers?: readonly FieldLayer[];
+  /** Accessible name of the drawing. */
+  title?: string;
+  className?: string;
+};
+
+const pointsAttr = (points: readonly Point2d[]) => points.map((p) => `${p.xM},${p.yM}`).join(' ');
+
+/** Upright text at a field point inside the y-flipped group. */
+function Label({ at, text, size = LETTER_M }: { at: Point2d; text: string; size?: number }) {
+  return (
+    <text
+      transform={`translate(${at.xM} ${at.yM}) scale(1 -1)`}
+      fontSize={size}
+      textAnchor="middle"
+      dominantBaseline="central"
+      fill={INK}
+      fontFamily="Barlow, sans-serif"
+    >
+      {text}
+    </text>
+  );
+}
+
+function Layer({ layer }: { layer: FieldLayer }) {
+  switch (layer.kind) {
+    case 'robot': {
+      const f = robotFootprint(layer, layer.lengthM, layer.widthM);
+      return (
+        <g data-layer="robot" data-id={layer.id}>
+          <polygon points={pointsAttr(f.corners)} fill={layer.colour} fillOpacity={0.35} stroke={layer.colour} strokeWidth={LINE_M} />
+          <line x1={layer.xM} y1={layer.yM} x2={f.noseM.xM} y2={f.noseM.yM} stroke={INK} strokeWidth={LINE_M} />
+        </g>
+      );
+    }
+    case 'trail':
+      return (
+        <polyline
+          data-layer="trail"
+          data-id={layer.id}
+          points={pointsAttr(layer.points)}
+          fill="none"
+          stroke={layer.colour}
+          strokeWidth={LINE_M}
+          strokeLinejoin="round"
+        />
+      );
+    case 'target':
+      return (
+        <g data-layer="target" data-id={layer.id}>
+          <g transform={`translate(${layer.xM} ${layer.yM}) rotate(${layer.headingDeg ?? 0})`}>
+            <circle r={TARGET_RADIUS_M} fill="none" stroke={layer.colour} strokeWidth={LINE_M} />
+            {layer.headingDeg !== undefined && (
+              <line x1={0} y1={0} x2={TARGET_RADIUS_M * 2} y2={0} stroke={layer.colour} strokeWidth={LINE_M} />
+            )}
+          </g>
+          {layer.label !== undefined && <Label at={{ xM: layer.xM, yM: layer.yM }} text={layer.label} size={LETTER_M * 0.8} />}
+        </g>
+      );
+  }
+}
+
+/** The season's field to scale, in metres with +y up, plus robot, trail and target layers. */
+export function FieldDrawing({ season, layers = [], title = 'Field map', className }: FieldDrawingProps) {
+  const plan = fieldPlan(season);
+  const { minX, minY, width, height } = plan.viewBox;
+  return (
+    <svg
+      viewBox={`${minX} ${minY} ${width} ${height}`}
+      role="img"
+      aria-label={title}
+      className={className}
+      preserveAspectRatio="xMidYMid meet"
+    >
+      <title>{title}</title>
+      <g transform="scale(1 -1)">
+        <polygon points={pointsAttr(plan.outline)} fill={SURFACE} stroke={INK} strokeWidth={LINE_M * 2} />
+        <line
+          x1={plan.centreLine.from.xM}
+          y1={plan.centreLine.from.yM}
+          x2={plan.centreLine.to.xM}
+          y2={plan.centreLine.to.yM}
+          stroke={STRUCTURE}
+          strokeWidth={LINE_M}
+          strokeDasharray="0.1 0.1"
+        />
+        {plan.startingLines.map((s) => (
+          <line
+            key={`start-${s.alliance}`}
+            data-element="starting-line"
+            x1={s.from.xM}
+            y1={s.from.yM}
+            x2={s.to.xM}
+            y2={s.to.yM}
+            stroke={ALLIANCE_COLOURS[s.alliance]}
+            strokeWidth={LINE_M * 1.5}
+            strokeDasharray="0.25 0.12"
+          />
+        ))}
+        <polygon
+          data-element="barge"
+          points={pointsAttr(plan.barge.corners)}
+          fill={STRUCTURE}
+          fillOpacity={0.3}
+          stroke={STRUCTURE}
+          strokeWidth={LINE_M}
+        />
+        {plan.barge.cages.map((c) => (
+          <circle
+            key={`cage-${c.alliance}-${c.name}`}
+            data-element="cage"
+            cx={c.at.xM}
+            cy={c.at.yM}
+            r={0.15}
+            fill="none"
+            stroke={ALLIANCE_COLOURS[c.alliance]}
+            strokeWidth={LINE_M * 1.5}
+          />
+        ))}
+        {plan.coralStations.map((s) => (
+          <line
+            key={`station-${s.alliance}-${s.name}`}
+            data-element="coral-station"
+            x1={s.from.xM}
+            y1={s.from.yM}
+            x2={s.to.xM}
+            y2={s.to.yM}
+            stroke={ALLIANCE_COLOURS[s.alliance]}
+            strokeWidth={LINE_M * 3}
+          />
+        ))}
+        {plan.processors.map((p) => (
+          <line
+            key={`processor-${p.alliance}`}
+            data-element="processor"
+            x1={p.from.xM}
+            y1={p.from.yM}
+            x2={p.to.xM}
+            y2={p.to.yM}
+            stroke={ALLIANCE_COLOURS[p.alliance]}
+            strokeWidth={LINE_M * 4}
+          />
+        ))}
+        {plan.reefs.map((reef) => (
+          <g key={`reef-${reef.alliance}`} data-element="reef" data-alliance={reef.alliance}>
+            <polygon
+              points={pointsAttr(reef.outline)}
+              fill={ALLIANCE_COLOURS[reef.alliance]}
+              fillOpacity={0.18}
+              stroke={ALLIANCE_COLOURS[reef.alliance]}
+              strokeWidth={LINE_M * 1.5}
+            />
+            {reef.branches.map((b) => (
+              <g key={b.letter} data-branch={b.letter}>
+                <circle cx={b.at.xM} cy={b.at.yM} r={0.035} fill={INK} />
+                <Label at={b.labelAt} text={b.letter} />
+              </g>
+            ))}
+          </g>
+        ))}
+        {layers.map((layer) => (
+          <Layer key={`${layer.kind}-${layer.id}`} layer={layer} />
+        ))}
+      </g>
+    </svg>
+  );
+}
