@@ -1,6 +1,6 @@
 import { robotFootprint } from '../../../shared/domain/geometry/footprint';
 import type { Point2d } from '../../../shared/domain/geometry/pose2d';
-import { fieldPlan } from '../../../shared/domain/season/field-plan';
+import { fieldPlan, type Segment } from '../../../shared/domain/season/field-plan';
 import type { Alliance, SeasonProfile } from '../../../shared/domain/season/season-profile';
 
 /** Okabe–Ito colour-blind-safe palette: vermilion for red, blue for blue. */
@@ -63,6 +63,34 @@ function Label({ at, text, size = LETTER_M }: { at: Point2d; text: string; size?
   );
 }
 
+/** A straight field segment drawn as one line. */
+function SegmentLine({
+  segment,
+  element,
+  colour,
+  widthM,
+  dash,
+}: {
+  segment: Segment;
+  element?: string;
+  colour: string;
+  widthM: number;
+  dash?: string;
+}) {
+  return (
+    <line
+      data-element={element}
+      x1={segment.from.xM}
+      y1={segment.from.yM}
+      x2={segment.to.xM}
+      y2={segment.to.yM}
+      stroke={colour}
+      strokeWidth={widthM}
+      strokeDasharray={dash}
+    />
+  );
+}
+
 function Layer({ layer }: { layer: FieldLayer }) {
   switch (layer.kind) {
     case 'robot': {
@@ -116,26 +144,15 @@ export function FieldDrawing({ season, layers = [], title = 'Field map', classNa
       <title>{title}</title>
       <g transform="scale(1 -1)">
         <polygon points={pointsAttr(plan.outline)} fill={SURFACE} stroke={INK} strokeWidth={LINE_M * 2} />
-        <line
-          x1={plan.centreLine.from.xM}
-          y1={plan.centreLine.from.yM}
-          x2={plan.centreLine.to.xM}
-          y2={plan.centreLine.to.yM}
-          stroke={STRUCTURE}
-          strokeWidth={LINE_M}
-          strokeDasharray="0.1 0.1"
-        />
+        <SegmentLine segment={plan.centreLine} colour={STRUCTURE} widthM={LINE_M} dash="0.1 0.1" />
         {plan.startingLines.map((s) => (
-          <line
+          <SegmentLine
             key={`start-${s.alliance}`}
-            data-element="starting-line"
-            x1={s.from.xM}
-            y1={s.from.yM}
-            x2={s.to.xM}
-            y2={s.to.yM}
-            stroke={ALLIANCE_COLOURS[s.alliance]}
-            strokeWidth={LINE_M * 1.5}
-            strokeDasharray="0.25 0.12"
+            segment={s}
+            element="starting-line"
+            colour={ALLIANCE_COLOURS[s.alliance]}
+            widthM={LINE_M * 1.5}
+            dash="0.25 0.12"
           />
         ))}
         <polygon
@@ -159,27 +176,21 @@ export function FieldDrawing({ season, layers = [], title = 'Field map', classNa
           />
         ))}
         {plan.coralStations.map((s) => (
-          <line
+          <SegmentLine
             key={`station-${s.alliance}-${s.name}`}
-            data-element="coral-station"
-            x1={s.from.xM}
-            y1={s.from.yM}
-            x2={s.to.xM}
-            y2={s.to.yM}
-            stroke={ALLIANCE_COLOURS[s.alliance]}
-            strokeWidth={LINE_M * 3}
+            segment={s}
+            element="coral-station"
+            colour={ALLIANCE_COLOURS[s.alliance]}
+            widthM={LINE_M * 3}
           />
         ))}
         {plan.processors.map((p) => (
-          <line
+          <SegmentLine
             key={`processor-${p.alliance}`}
-            data-element="processor"
-            x1={p.from.xM}
-            y1={p.from.yM}
-            x2={p.to.xM}
-            y2={p.to.yM}
-            stroke={ALLIANCE_COLOURS[p.alliance]}
-            strokeWidth={LINE_M * 4}
+            segment={p}
+            element="processor"
+            colour={ALLIANCE_COLOURS[p.alliance]}
+            widthM={LINE_M * 4}
           />
         ))}
         {plan.reefs.map((reef) => (
