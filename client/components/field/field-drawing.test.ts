@@ -2,8 +2,8 @@ import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { season2025 } from '../../../shared/domain/season/season-2025';
-import * as mod from './FieldDrawing';
-import { ALLIANCE_COLOURS, FieldDrawing, type FieldLayer } from './FieldDrawing';
+import * as mod from './field-drawing';
+import { ALLIANCE_COLOURS, FieldDrawing, type FieldLayer } from './field-drawing';
 
 const render = (layers: FieldLayer[] = []) => renderToStaticMarkup(createElement(FieldDrawing, { season: season2025, layers }));
 const count = (html: string, needle: string) => html.split(needle).length - 1;
