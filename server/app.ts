@@ -19,6 +19,9 @@ import { teamRouter } from './features/team/team.routes';
 import { createTeamService } from './features/team/team.service';
 import { AppError, errorHandler } from './lib/errors';
 import type { Logger } from './lib/logger';
+import { createRelay, type Relay, type RelayDeps } from './relay/relay-server';
+import { relayAuthenticators } from './relay/relay-auth';
+import { MemoryTelemetryStore, type TelemetryStore } from './relay/telemetry-store';
 
 export interface AppDeps {
   db: Db;
@@ -34,10 +37,16 @@ export interface AppDeps {
   clientDir?: string;
   signInLimit?: SignInLimit;
   now?: () => Date;
+  /** Where the relay stores robot telemetry before confirming it; in memory by default. */
+  telemetryStore?: TelemetryStore;
+  /** Relay timing and limits (tests shorten them). */
+  relay?: Partial<Pick<RelayDeps, 'heartbeatMs' | 'staleMs' | 'viewerStaleMs' | 'maxFrameBytes' | 'limits' | 'helloTimeoutMs'>>;
 }
 
 export interface App {
   express: Express;
+  /** Attach to the HTTP server's `upgrade` event. */
+  relay: Relay;
   services: {
     auth: ReturnType<typeof createAuthService>;
     team: ReturnType<typeof createTeamService>;
@@ -52,7 +61,18 @@ export function createApp(deps: AppDeps): App {
   const tokens = createSessionTokens(deps.tokenSecret, now);
   const common = { mailer: deps.mailer, publicUrl: deps.publicUrl, logger: deps.logger, now };
   const auth = createAuthService({ store: authStore(deps.db), ...common });
-  const team = createTeamService({ store: teamStore(deps.db), ...common });
+  let relay: Relay | undefined;
+  const team = createTeamService({
+    store: teamStore(deps.db),
+    ...common,
+    onRobotKeyRevoked: (keyId) => relay?.disconnectKey(keyId),
+  });
+  relay = createRelay({
+    ...relayAuthenticators({ tokens, auth, team }),
+    store: deps.telemetryStore ?? new MemoryTelemetryStore(),
+    logger: deps.logger,
+    ...deps.relay,
+  });
   const season = createSeasonService({ profiles: robotProfileRepo(deps.db) });
 
   const app = express();
@@ -80,5 +100,5 @@ export function createApp(deps: AppDeps): App {
   }
   app.use(errorHandler(deps.logger));
 
-  return { express: app, services: { auth, team, season } };
+  return { express: app, relay, services: { auth, team, season } };
 }

@@ -107,6 +107,7 @@ export async function startServer({ env, logger, databaseUrl, seed }: StartOptio
     clientDir: CLIENT_DIST,
   });
   server.on('request', app.express);
+  server.on('upgrade', (req, socket, head) => app.relay.handleUpgrade(req, socket, head));
 
   return {
     url,
@@ -114,6 +115,7 @@ export async function startServer({ env, logger, databaseUrl, seed }: StartOptio
     databaseUrl,
     devInbox: mail.fake?.inbox,
     async stop() {
+      await app.relay.close();
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await mail.fake?.close();

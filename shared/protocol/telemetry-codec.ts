@@ -11,7 +11,7 @@ export const TELEMETRY_FORMAT = 1;
 const HEADER_BYTES = 5;
 
 /** Packs `rows` (one array of S values per tick; NaN for unknown in the first tick) into the payload. */
-export function encodeTelemetry(rows: readonly ArrayLike<number>[], signalCount: number): Uint8Array {
+export function encodeTelemetry(rows: readonly ArrayLike<number>[], signalCount: number): Uint8Array<ArrayBuffer> {
   const maskBytes = Math.ceil(signalCount / 8);
   const worst = HEADER_BYTES + rows.length * (maskBytes + signalCount * 4);
   const out = new Uint8Array(worst);

@@ -35,6 +35,7 @@ export async function startTestServer(overrides: Partial<AppDeps> = {}): Promise
     ...overrides,
   });
   server.on('request', app.express);
+  server.on('upgrade', (req, socket, head) => app.relay.handleUpgrade(req, socket, head));
   return {
     app,
     db,
@@ -48,6 +49,7 @@ export async function startTestServer(overrides: Partial<AppDeps> = {}): Promise
       return Object.assign(agent, { csrf });
     },
     async close() {
+      await app.relay.close();
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await smtp.close();

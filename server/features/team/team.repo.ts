@@ -194,12 +194,20 @@ export function teamRepo(db: Executor) {
     },
 
     /** The live key with this secret hash, marking it used. */
-    async useRobotKey(secretHash: string, now: Date): Promise<{ id: string; teamId: string; name: string } | undefined> {
+    async useRobotKey(
+      secretHash: string,
+      now: Date,
+    ): Promise<{ id: string; teamId: string; teamNumber: number; name: string } | undefined> {
       const [row] = await db
         .update(robotKeys)
         .set({ lastUsedAt: now })
         .where(and(eq(robotKeys.secretHash, secretHash), isNull(robotKeys.revokedAt)))
-        .returning({ id: robotKeys.id, teamId: robotKeys.teamId, name: robotKeys.name });
+        .returning({
+          id: robotKeys.id,
+          teamId: robotKeys.teamId,
+          name: robotKeys.name,
+          teamNumber: sql<number>`(select ${teams.number} from ${teams} where ${teams.id} = ${robotKeys.teamId})`,
+        });
       return row;
     },
   };

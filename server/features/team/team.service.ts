@@ -18,11 +18,13 @@ export interface TeamServiceDeps {
   publicUrl: string;
   logger: Logger;
   now: () => Date;
+  /** Told after a key is revoked, so live robot sessions using it can be closed. */
+  onRobotKeyRevoked?: (keyId: string) => void;
 }
 
 const noLeadLeft = () => conflict('A team keeps at least one lead: make someone else lead first');
 
-export function createTeamService({ store, mailer, publicUrl, logger, now }: TeamServiceDeps) {
+export function createTeamService({ store, mailer, publicUrl, logger, now, onRobotKeyRevoked }: TeamServiceDeps) {
   async function memberOrThrow(teamId: string, userId: string): Promise<Member> {
     const member = (await store.listMembers(teamId)).find((m) => m.userId === userId);
     if (!member) throw notFound('That member');
@@ -136,13 +138,16 @@ export function createTeamService({ store, mailer, publicUrl, logger, now }: Tea
 
     async revokeRobotKey(actor: Actor, id: string): Promise<void> {
       if (!(await store.revokeRobotKey(actor.team.id, id, now()))) throw notFound('That live robot key');
+      onRobotKeyRevoked?.(id);
     },
 
     /** The team and key a robot's secret belongs to, or undefined for an unknown or revoked key. */
-    async authenticateRobot(secret: string): Promise<{ keyId: string; teamId: string; name: string } | undefined> {
+    async authenticateRobot(
+      secret: string,
+    ): Promise<{ keyId: string; teamId: string; teamNumber: number; name: string } | undefined> {
       if (!secret.startsWith(`${ROBOT_KEY_PREFIX}_`)) return undefined;
       const key = await store.useRobotKey(sha256(secret), now());
-      return key ? { keyId: key.id, teamId: key.teamId, name: key.name } : undefined;
+      return key ? { keyId: key.id, teamId: key.teamId, teamNumber: key.teamNumber, name: key.name } : undefined;
     },
   };
 }
