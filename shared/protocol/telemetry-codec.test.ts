@@ -25,6 +25,13 @@ describe('encodeTelemetry', () => {
     expect(encodeTelemetry([[1.5, 0, Number.NaN, 12.25], [1.6, 0, 3, 12.25], [1.7, 1, 3, 12.25]], 4).byteLength).toBe(36);
   });
 
+  // The worked example of docs/relay-protocol.md; float32 bit patterns from IEEE 754 (1.5 = 0x3fc00000,
+  // 1 = 0x3f800000, 12 = 0x41400000), written little-endian.
+  it('writes the bytes of the protocol document’s worked example', () => {
+    const hex = Buffer.from(encodeTelemetry([[1.5, 0, 12], [1.5, 1, 12]], 3)).toString('hex');
+    expect(hex).toBe('0103000200' + '07' + '0000c03f' + '00000000' + '00004041' + '02' + '0000803f');
+  });
+
   it('sends an unchanged tick as its mask alone', () => {
     const rows = Array.from({ length: 10 }, () => Array.from({ length: 200 }, (_, i) => i));
     // 5 + (25 + 200 × 4) + 9 × 25
