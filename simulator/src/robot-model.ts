@@ -448,9 +448,9 @@ export function createRobotModel(options: RobotModelOptions): RobotModel {
       m.angleDeg = angle;
       // About 6.5 A per m/s² of module acceleration for a ~60 kg robot, under a 60 A current limit (rough
       // estimate and common practice, no source); corners of a path turn the velocity in one tick, hence the clamp.
-      const torqueAccel = Math.min(accel, 1.5 * robot.driveMaxAccelMps2);
+      const torqueAccel = Math.min(accel, robot.driveMaxAccelMps2);
       m.driveA = isEnabled ? Math.min(DRIVE_CURRENT_LIMIT_A, Math.max(0, 1 + 6.5 * torqueAccel + 0.6 * speed + noise.normal(0, 0.3))) : 0;
-      m.steerA = isEnabled ? Math.max(0, Math.min(20, 0.4 + 0.015 * steerRate + noise.normal(0, 0.1))) : 0;
+      m.steerA = isEnabled ? Math.max(0, Math.min(10, 0.4 + 0.004 * steerRate + noise.normal(0, 0.1))) : 0;
       m.driveTempC = heat(m.driveTempC, m.driveA, dtS);
       m.steerTempC = heat(m.steerTempC, m.steerA, dtS);
       totalA += m.driveA + m.steerA;
