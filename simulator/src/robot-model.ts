@@ -202,7 +202,7 @@ export function createRobotModel(options: RobotModelOptions): RobotModel {
   }
 
   function liftTo(heightM: number) {
-    if (heightM === elevatorGoalM && lift) return;
+    if (heightM === elevatorGoalM && (lift !== undefined || elevatorM === heightM)) return;
     elevatorGoalM = heightM;
     lift = { from: elevatorM, leg: planLeg(heightM - elevatorM, elevatorVel, ELEVATOR_LIMITS), elapsedS: 0 };
   }
