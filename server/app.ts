@@ -87,7 +87,7 @@ export function createApp(deps: AppDeps): App {
   api.use(healthRouter({ db: deps.db, devInbox: deps.devInbox }));
   api.use(authRouter({ auth, tokens, cookies, signInLimit: deps.signInLimit ?? DEFAULT_SIGN_IN_LIMIT }));
   api.use(teamRouter({ team, auth, tokens, cookies }));
-  api.use(seasonRouter({ season }));
+  api.use(seasonRouter({ season, team }));
   api.use(() => {
     throw new AppError('not_found', 'No such API route');
   });

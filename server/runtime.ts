@@ -9,6 +9,8 @@ import { connectDb, type DbHandle } from './db/client';
 import { startEmbeddedPostgres, withDatabase, type EmbeddedPostgres } from './db/embedded-postgres';
 import { runMigrations } from './db/migrate';
 import { seedDemo } from './features/demo/seed';
+import { ensureSimulatorKey } from './features/demo/simulator-key';
+import { RELAY_PATH } from './relay/relay-server';
 import { startFakeSmtp, type DevInbox, type FakeSmtp } from './features/mail/fake-smtp';
 import { createSmtpMailer, type Mailer } from './features/mail/mailer';
 import { loadTokenSecret, type Env } from './env';
@@ -21,6 +23,10 @@ const DATABASE_NAME = 'pitwall';
 export interface Running {
   url: string;
   port: number;
+  /** ws://…/relay */
+  relayUrl: string;
+  /** The demo simulator's robot key file, when the demo was seeded. */
+  simulatorKeyFile: string | undefined;
   databaseUrl: string;
   devInbox: DevInbox | undefined;
   stop(): Promise<void>;
@@ -108,10 +114,15 @@ export async function startServer({ env, logger, databaseUrl, seed }: StartOptio
   });
   server.on('request', app.express);
   server.on('upgrade', (req, socket, head) => app.relay.handleUpgrade(req, socket, head));
+  const dataDir = path.resolve(PROJECT_ROOT, env.PITWALL_DATA_DIR);
+  const simulatorKeyFile = seed ? path.join(dataDir, 'simulator-key') : undefined;
+  if (simulatorKeyFile) await ensureSimulatorKey(handle.db, app.services.team, simulatorKeyFile);
 
   return {
     url,
     port,
+    relayUrl: `${url.replace(/^http/, 'ws')}${RELAY_PATH}`,
+    simulatorKeyFile,
     databaseUrl,
     devInbox: mail.fake?.inbox,
     async stop() {

@@ -6,7 +6,7 @@ import { createLogger } from '../lib/logger';
 import { PROJECT_ROOT, provideDatabase } from '../runtime';
 
 const env = readEnv();
-const logger = createLogger(env.LOG_LEVEL);
+const logger = createLogger(env.LOG_LEVEL, { human: true });
 const database = await provideDatabase(env, logger);
 const apiPort = String(env.PORT);
 const childEnv = {

@@ -4,7 +4,7 @@ import { createLogger } from '../lib/logger';
 import { provideDatabase, startServer } from '../runtime';
 
 const env = readEnv();
-const logger = createLogger(env.LOG_LEVEL);
+const logger = createLogger(env.LOG_LEVEL, { human: true });
 const database = await provideDatabase(env, logger);
 const running = await startServer({ env, logger, databaseUrl: database.url, seed: true });
 logger.info(`API listening on ${running.url}${running.devInbox ? ` (dev inbox at ${running.url}/dev/inbox)` : ''}`);

@@ -4,14 +4,16 @@ import { readEnv } from '../env';
 import { createLogger } from '../lib/logger';
 import { provideDatabase, startServer } from '../runtime';
 import { buildClientIfStale } from './build-client';
+import { startSimulator } from './simulator-process';
 
 async function main(): Promise<void> {
   const started = Date.now();
   const env = readEnv();
-  const logger = createLogger(env.LOG_LEVEL);
+  const logger = createLogger(env.LOG_LEVEL, { human: true });
   buildClientIfStale((line) => logger.info(line));
   const database = await provideDatabase(env, logger);
   const running = await startServer({ env, logger, databaseUrl: database.url, seed: true });
+  const simulator = env.PITWALL_SIMULATOR && running.simulatorKeyFile ? startSimulator(running.relayUrl, running.simulatorKeyFile) : undefined;
 
   const width = Math.max(...DEMO_MEMBERS.map((m) => m.email.length));
   const lines = [
@@ -21,6 +23,9 @@ async function main(): Promise<void> {
     `  Demo sign-ins for team ${DEMO_TEAM.number} ${DEMO_TEAM.name} (password for all: ${DEMO_PASSWORD})`,
     ...DEMO_MEMBERS.map((m) => `    ${m.role.padEnd(11)} ${m.email.padEnd(width)}  ${m.name}`),
     '',
+    simulator
+      ? `  A SIMULATED robot (${DEMO_TEAM.robot}) is on the relay: watch it at ${running.url}/live`
+      : '  No simulator (PITWALL_SIMULATOR=0).',
     running.devInbox ? `  Mail is caught locally: open ${running.url}/dev/inbox` : '  Mail goes out through SMTP_HOST.',
     '  Stop with Ctrl+C.',
     '',
@@ -32,6 +37,7 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     logger.info('stopping…');
+    simulator?.kill('SIGTERM');
     await running.stop();
     await database.stop();
     process.exit(0);
