@@ -1,10 +1,11 @@
 import { useEffect, useState } from 'react';
 import { Button } from './button';
+import type { ButtonVariant } from './button-styles';
 
 type CopyState = 'idle' | 'copied' | 'failed';
 
 /** Copies `text` to the clipboard and says so for two seconds. */
-export function CopyButton({ text, label = 'Copy' }: { text: string; label?: string }) {
+export function CopyButton({ text, label = 'Copy', variant = 'primary' }: { text: string; label?: string; variant?: ButtonVariant }) {
   const [state, setState] = useState<CopyState>('idle');
 
   useEffect(() => {
@@ -25,7 +26,7 @@ export function CopyButton({ text, label = 'Copy' }: { text: string; label?: str
 
   return (
     <span className="inline-flex items-center gap-2">
-      <Button size="sm" variant="primary" onClick={copy}>
+      <Button size="sm" variant={variant} onClick={copy}>
         {label}
       </Button>
       <span aria-live="polite" className="text-sm text-asphalt-300">

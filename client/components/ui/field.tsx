@@ -3,7 +3,7 @@ import { useId, type ReactNode } from 'react';
 export type FieldControlProps = { id: string; 'aria-invalid': boolean | undefined; 'aria-describedby': string | undefined };
 
 type FieldProps = {
-  label: string;
+  label: ReactNode;
   hint?: ReactNode;
   error?: string | undefined;
   children: (control: FieldControlProps) => ReactNode;

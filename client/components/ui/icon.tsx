@@ -1,6 +1,19 @@
 import { cx } from '../../lib/cx';
 
-export type IconName = 'home' | 'panels' | 'live' | 'recordings' | 'cycles' | 'drills' | 'team' | 'inbox' | 'signOut' | 'key' | 'mail';
+export type IconName =
+  | 'home'
+  | 'panels'
+  | 'live'
+  | 'recordings'
+  | 'cycles'
+  | 'drills'
+  | 'team'
+  | 'inbox'
+  | 'signOut'
+  | 'key'
+  | 'mail'
+  | 'field'
+  | 'robot';
 
 const PATHS: Record<IconName, string> = {
   home: 'M4 11 12 4l8 7M6 9.5V20h4.5v-5h3v5H18V9.5',
@@ -14,6 +27,8 @@ const PATHS: Record<IconName, string> = {
   signOut: 'M15 4h4v16h-4M10 8l-4 4 4 4M6 12h10',
   key: 'M14.5 9.5a4.5 4.5 0 1 1-1.3-3.2M13.2 10.8 20 17.5V20h-2.5v-2h-2v-2h-2',
   mail: 'M3 6h18v12H3zM3 7l9 6.5L21 7',
+  field: 'M3 5h18v14H3zM12 5v14M8.5 9.5 10 12l-1.5 2.5h-3L4 12l1.5-2.5zM15.5 9.5h3L20 12l-1.5 2.5h-3L14 12z',
+  robot: 'M5 7h14v12H5zM3 9v8M21 9v8M9 11h.01M15 11h.01M9 15h6M12 7V4',
 };
 
 export function Icon({ name, className }: { name: IconName; className?: string }) {
