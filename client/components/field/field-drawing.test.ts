@@ -3,7 +3,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { season2025 } from '../../../shared/domain/season/season-2025';
 import * as mod from './field-drawing';
-import { ALLIANCE_COLOURS, FieldDrawing, type FieldLayer } from './field-drawing';
+import { ALLIANCE_COLOURS, FieldDrawing, windowViewBox, type FieldLayer } from './field-drawing';
 
 const render = (layers: FieldLayer[] = []) => renderToStaticMarkup(createElement(FieldDrawing, { season: season2025, layers }));
 const count = (html: string, needle: string) => html.split(needle).length - 1;
@@ -62,6 +62,24 @@ describe('FieldDrawing', () => {
     expect(robotAt).toBeGreaterThan(trailAt);
     expect(targetAt).toBeGreaterThan(robotAt);
     expect(html).toContain('translate(3.1576 4.191) rotate(0)');
+  });
+
+  it('shows only a window of the field when given one, with y negated like the whole field', () => {
+    const html = renderToStaticMarkup(
+      createElement(FieldDrawing, { season: season2025, window: { xMinM: 2.5, yMinM: 2, xMaxM: 6.5, yMaxM: 6 } }),
+    );
+    expect(html).toContain('viewBox="2.5 -6 4 4"');
+    expect(windowViewBox({ xMinM: 11, yMinM: 1.5, xMaxM: 15, yMaxM: 6.5 })).toEqual({ minX: 11, minY: -6.5, width: 4, height: 5 });
+  });
+
+  it('fills a highlighted target and marks it for tests and styling', () => {
+    const html = render([
+      { kind: 'target', id: 'A', xM: 3, yM: 4, colour: '#009E73' },
+      { kind: 'target', id: 'B', xM: 3, yM: 4.3, colour: '#009E73', isHighlighted: true },
+    ]);
+    expect(count(html, 'data-highlighted="true"')).toBe(1);
+    expect(html).toMatch(/data-id="B" data-highlighted="true"/);
+    expect(count(html, 'fill="#009E73"')).toBe(1);
   });
 
   it('has only named exports', () => {

@@ -1,6 +1,6 @@
 import { robotFootprint } from '../../../shared/domain/geometry/footprint';
 import type { Point2d } from '../../../shared/domain/geometry/pose2d';
-import { fieldPlan, type Segment } from '../../../shared/domain/season/field-plan';
+import { fieldPlan, type FieldPlan, type Segment } from '../../../shared/domain/season/field-plan';
 import type { Alliance, SeasonProfile } from '../../../shared/domain/season/season-profile';
 
 /** Okabe–Ito colour-blind-safe palette: vermilion for red, blue for blue. */
@@ -33,13 +33,24 @@ export type TargetLayer = {
   headingDeg?: number;
   colour: string;
   label?: string;
+  /** Drawn filled and heavier, e.g. the target a table row points at. */
+  isHighlighted?: boolean;
 };
 export type FieldLayer = RobotLayer | TrailLayer | TargetLayer;
+
+/** A rectangle of the field in field metres (+y up), e.g. to show one reef close up. */
+export type FieldWindow = { xMinM: number; yMinM: number; xMaxM: number; yMaxM: number };
 
 export type FieldDrawingProps = {
   season: SeasonProfile;
   /** Drawn in order, on top of the field. */
   layers?: readonly FieldLayer[];
+  /** Shows only this part of the field, still to scale; the whole field with its margin when omitted. */
+  window?: FieldWindow;
+  /** Pointer over a target marker (its id), or off it (null). */
+  onTargetHover?: (id: string | null) => void;
+  /** A click or tap on a target marker. */
+  onTargetSelect?: (id: string) => void;
   /** Accessible name of the drawing. */
   title?: string;
   className?: string;
@@ -91,7 +102,14 @@ function SegmentLine({
   );
 }
 
-function Layer({ layer }: { layer: FieldLayer }) {
+type TargetHandlers = Pick<FieldDrawingProps, 'onTargetHover' | 'onTargetSelect'>;
+
+/** The SVG viewBox of a field window: y is negated because the drawing flips it inside scale(1, −1). */
+export function windowViewBox(w: FieldWindow): FieldPlan['viewBox'] {
+  return { minX: w.xMinM, minY: -w.yMaxM, width: w.xMaxM - w.xMinM, height: w.yMaxM - w.yMinM };
+}
+
+function Layer({ layer, onTargetHover, onTargetSelect }: { layer: FieldLayer } & TargetHandlers) {
   switch (layer.kind) {
     case 'robot': {
       const f = robotFootprint(layer, layer.lengthM, layer.widthM);
@@ -114,25 +132,51 @@ function Layer({ layer }: { layer: FieldLayer }) {
           strokeLinejoin="round"
         />
       );
-    case 'target':
+    case 'target': {
+      const isInteractive = onTargetHover !== undefined || onTargetSelect !== undefined;
+      const strokeM = layer.isHighlighted ? LINE_M * 2 : LINE_M;
       return (
-        <g data-layer="target" data-id={layer.id}>
+        <g
+          data-layer="target"
+          data-id={layer.id}
+          data-highlighted={layer.isHighlighted || undefined}
+          style={isInteractive ? { cursor: 'pointer' } : undefined}
+          onPointerEnter={onTargetHover && (() => onTargetHover(layer.id))}
+          onPointerLeave={onTargetHover && (() => onTargetHover(null))}
+          onClick={onTargetSelect && (() => onTargetSelect(layer.id))}
+        >
           <g transform={`translate(${layer.xM} ${layer.yM}) rotate(${layer.headingDeg ?? 0})`}>
-            <circle r={TARGET_RADIUS_M} fill="none" stroke={layer.colour} strokeWidth={LINE_M} />
+            <circle
+              r={layer.isHighlighted ? TARGET_RADIUS_M * 1.25 : TARGET_RADIUS_M}
+              // A transparent fill, not none, so the whole disc takes the pointer.
+              fill={layer.isHighlighted ? layer.colour : 'transparent'}
+              fillOpacity={layer.isHighlighted ? 0.35 : undefined}
+              stroke={layer.colour}
+              strokeWidth={strokeM}
+            />
             {layer.headingDeg !== undefined && (
-              <line x1={0} y1={0} x2={TARGET_RADIUS_M * 2} y2={0} stroke={layer.colour} strokeWidth={LINE_M} />
+              <line x1={0} y1={0} x2={TARGET_RADIUS_M * 2} y2={0} stroke={layer.colour} strokeWidth={strokeM} />
             )}
           </g>
           {layer.label !== undefined && <Label at={{ xM: layer.xM, yM: layer.yM }} text={layer.label} size={LETTER_M * 0.8} />}
         </g>
       );
+    }
   }
 }
 
 /** The season's field to scale, in metres with +y up, plus robot, trail and target layers. */
-export function FieldDrawing({ season, layers = [], title = 'Field map', className }: FieldDrawingProps) {
+export function FieldDrawing({
+  season,
+  layers = [],
+  window,
+  title = 'Field map',
+  className,
+  onTargetHover,
+  onTargetSelect,
+}: FieldDrawingProps) {
   const plan = fieldPlan(season);
-  const { minX, minY, width, height } = plan.viewBox;
+  const { minX, minY, width, height } = window ? windowViewBox(window) : plan.viewBox;
   return (
     <svg
       viewBox={`${minX} ${minY} ${width} ${height}`}
@@ -211,7 +255,7 @@ export function FieldDrawing({ season, layers = [], title = 'Field map', classNa
           </g>
         ))}
         {layers.map((layer) => (
-          <Layer key={`${layer.kind}-${layer.id}`} layer={layer} />
+          <Layer key={`${layer.kind}-${layer.id}`} layer={layer} onTargetHover={onTargetHover} onTargetSelect={onTargetSelect} />
         ))}
       </g>
     </svg>
