@@ -20,6 +20,7 @@ export function MainNav({ role, hasDevInbox, isCompact = false }: MainNavProps) 
         <p className="mt-4 mb-1 px-3 text-2xs font-semibold tracking-[0.16em] text-asphalt-500 uppercase">Team</p>
       )}
       {can(role, 'team.read') && <NavItem to="/settings/team" icon="team" label="Team settings" isCompact={isCompact} />}
+      {can(role, 'team.read') && <NavItem to="/settings/robot" icon="robot" label="Robot profile" isCompact={isCompact} />}
       {hasDevInbox && <NavItem to="/dev/inbox" icon="inbox" label="Dev inbox" isCompact={isCompact} />}
     </nav>
   );

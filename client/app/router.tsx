@@ -29,6 +29,7 @@ const router = createBrowserRouter([
           { path: 'cycles', lazy: () => import('./routes/cycles') },
           { path: 'drills', lazy: () => import('./routes/drills') },
           { path: 'settings/team', lazy: () => import('./routes/team-settings') },
+          { path: 'settings/robot', lazy: () => import('./routes/robot-settings') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

@@ -1,8 +1,10 @@
 import { can } from '../../../shared/domain/roles';
+import { ButtonLink } from '../../components/ui/button-link';
 import { Notice } from '../../components/ui/notice';
 import { PageHeader } from '../../components/ui/page-header';
 import { Section } from '../../components/ui/section';
 import { useMe } from '../../features/auth/api/me';
+import { RobotSummary } from '../../features/robot/components/robot-summary';
 import { InviteForm } from '../../features/team/components/invite-form';
 import { MembersTable } from '../../features/team/components/members-table';
 import { PendingInvites } from '../../features/team/components/pending-invites';
@@ -19,7 +21,7 @@ export function Component() {
       <PageHeader
         eyebrow={<span className="num">Team {me.team.number}</span>}
         title="Team settings"
-        description={`Members, invites and robot keys for ${me.team.name}.`}
+        description={`Members, invites, the robot profile and robot keys for ${me.team.name}.`}
       />
       <div className="flex flex-col gap-5">
         <Section
@@ -31,6 +33,16 @@ export function Component() {
           }
         >
           <MembersTable viewerRole={role} viewerId={me.user.id} />
+        </Section>
+
+        <Section
+          title="Robot profile"
+          description="Size, scoring side and speeds of the robot. Scoring targets, the simulator and cycle estimates follow it."
+          actions={
+            <ButtonLink to="/settings/robot">{can(role, 'robotProfile.edit') ? 'Edit robot profile' : 'View robot profile'}</ButtonLink>
+          }
+        >
+          <RobotSummary />
         </Section>
 
         {can(role, 'invites.manage') ? (
