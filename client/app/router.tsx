@@ -28,6 +28,7 @@ const router = createBrowserRouter([
           { path: 'recordings', lazy: () => import('./routes/recordings') },
           { path: 'cycles', lazy: () => import('./routes/cycles') },
           { path: 'drills', lazy: () => import('./routes/drills') },
+          { path: 'season', lazy: () => import('./routes/season') },
           { path: 'settings/team', lazy: () => import('./routes/team-settings') },
           { path: 'settings/robot', lazy: () => import('./routes/robot-settings') },
           { path: '*', lazy: () => import('./routes/not-found') },
