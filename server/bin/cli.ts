@@ -9,6 +9,11 @@ import { createSeasonService } from '../features/season/season.service';
 import { teamStore } from '../features/team/team.repo';
 import type { BranchTargets } from '../../shared/domain/season/targets';
 import { targetsQuerySchema } from '../../shared/schemas/season';
+import { writeFileSync } from 'node:fs';
+import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
+import { season2025 } from '../../shared/domain/season/season-2025';
+import { runHeadlessMatch } from '../../simulator/src/headless';
+import { encodeHeadlessMatch } from '../../simulator/src/match-file';
 import { createTeamService } from '../features/team/team.service';
 import { readEnv } from '../env';
 import { provideDatabase } from '../runtime';
@@ -92,6 +97,34 @@ const COMMANDS: Record<string, Command> = {
         return;
       }
       process.stdout.write(`${formatTargets(result)}\n`);
+    },
+  },
+  simulate: {
+    summary: 'play a whole simulated match faster than real time and write it as a recording file',
+    usage: 'simulate --seed 7 --out match.pwrec [--alliance blue] [--team 19850]',
+    needsDb: (args) => args.has('team'),
+    async run(args, db) {
+      const seed = Number(args.get('seed') ?? '7');
+      const out = args.get('out');
+      if (!Number.isInteger(seed)) throw new Error('--seed takes a whole number');
+      if (!out) throw new Error('give --out FILE');
+      const alliance = args.get('alliance') === 'red' ? 'red' : 'blue';
+      let robot = DEFAULT_ROBOT_PROFILE;
+      if (db && args.has('team')) {
+        const team = await authStore(db).findTeamByNumber(Number(args.get('team')));
+        if (!team) throw new Error(`no team ${args.get('team')}`);
+        robot = (await robotProfileRepo(db).find(team.id))?.profile ?? DEFAULT_ROBOT_PROFILE;
+      }
+      const started = performance.now();
+      const match = runHeadlessMatch({ seed, season: season2025, robot, alliance });
+      const bytes = encodeHeadlessMatch(match, { source: 'simulator', robot: robot.name, seed });
+      writeFileSync(out, bytes);
+      const samples = match.batches.reduce((n, b) => n + b.ticks, 0) * match.signals.length;
+      const placed = match.events.filter((e) => e.kind === 'placed').length;
+      process.stdout.write(
+        `${out}: ${match.signals.length} signals, ${samples} samples, ${match.events.length} events (${placed} coral placed), ` +
+          `${bytes.byteLength} bytes (${(bytes.byteLength / samples).toFixed(2)} B/sample), ${(performance.now() - started).toFixed(0)} ms\n`,
+      );
     },
   },
 };
