@@ -18,6 +18,8 @@ export type Area = {
   action: TeamAction;
   canLine: string;
   cannotLine: string;
+  /** Built and usable; areas without it are shown as coming soon. */
+  isAvailable?: boolean;
 };
 
 export const AREAS: readonly Area[] = [
@@ -39,7 +41,8 @@ export const AREAS: readonly Area[] = [
     path: '/live',
     label: 'Live',
     icon: 'live',
-    tagline: 'Run the published panel at the driver station',
+    isAvailable: true,
+    tagline: 'Watch the robot over the relay and send it a target',
     description:
       'The published panel runs full-screen in the tablet’s browser. Each tap travels over the relay to the robot, which acknowledges it; lamps and readouts show the robot’s telemetry. The simulator stands in for the robot for rehearsal and demos, and every simulator session is marked as one.',
     usedBy: 'Operators at the driver station; programmers testing against the simulator.',

@@ -16,7 +16,7 @@ export function MainNav({ role, hasDevInbox, isCompact = false }: MainNavProps) 
       <NavItem to="/" end icon="home" label="Team home" isCompact={isCompact} />
       {!isCompact && <GroupLabel>Match work</GroupLabel>}
       {AREAS.map((area) => (
-        <NavItem key={area.id} to={area.path} icon={area.icon} label={area.label} isSoon isCompact={isCompact} />
+        <NavItem key={area.id} to={area.path} icon={area.icon} label={area.label} isSoon={!area.isAvailable} isCompact={isCompact} />
       ))}
       {!isCompact && <GroupLabel>Game</GroupLabel>}
       {can(role, 'team.read') && <NavItem to="/season" icon="field" label="Season" isCompact={isCompact} />}

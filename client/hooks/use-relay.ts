@@ -20,7 +20,7 @@ export function relayClient(): RelayClient {
     },
     // A browser tab is a viewer to the relay: it gets a longer stale limit, because browsers slow the
     // timers of a tab in the background. Its role, not its kind, decides what it may publish.
-    { hello: { kind: 'viewer', name: 'Pitwall Live page' }, heartbeatMs: 250, staleMs: 1500 },
+    { hello: { kind: 'viewer', name: 'Live page' }, heartbeatMs: 250, staleMs: 1500 },
   );
   return shared;
 }

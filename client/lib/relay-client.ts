@@ -124,6 +124,7 @@ export const TRAIL_WINDOW_MS = 5000;
 export const EVENTS_KEPT = 40;
 export const LATENCY_WINDOW = 200;
 const PUBLISHES_KEPT = 32;
+const CLOCK_POLL_MS = 1000;
 export const POSE_SIGNALS = { x: 'drive/pose/x', y: 'drive/pose/y', heading: 'drive/pose/heading' } as const;
 
 export const initialRelayState = (atMs = 0): RelayState => ({
@@ -373,6 +374,7 @@ export class RelayClient {
   private readonly link: RelayLink;
   private isFlushScheduled = false;
   private releaseTimer: unknown;
+  private clockTimer: unknown;
   private nextId = 1;
   private readonly waiting = new Map<number, (track: PublishTrack) => void>();
 
@@ -400,13 +402,18 @@ export class RelayClient {
     this.listeners.add(listener);
     this.deps.clearTimer(this.releaseTimer);
     this.releaseTimer = undefined;
-    if (this.link.status === 'stopped' || this.link.status === 'refused') this.link.start();
+    if (this.link.status === 'stopped' || this.link.status === 'refused') {
+      this.link.start();
+      this.pollClock();
+    }
     return () => {
       this.listeners.delete(listener);
       if (this.listeners.size > 0) return;
       this.deps.clearTimer(this.releaseTimer);
       this.releaseTimer = this.deps.setTimer(() => {
-        if (this.listeners.size === 0) this.link.stop();
+        if (this.listeners.size > 0) return;
+        this.link.stop();
+        this.deps.clearTimer(this.clockTimer);
       }, this.options.releaseGraceMs ?? 3000);
     };
   };
@@ -428,6 +435,20 @@ export class RelayClient {
     this.link.dropConnection();
   }
 
+  /** The link refines its clock on every pong without telling anyone: look at each flush and once a second. */
+  private pollClock(): void {
+    this.deps.clearTimer(this.clockTimer);
+    this.clockTimer = this.deps.setTimer(() => {
+      if (this.hasClockChanged()) this.dispatch({ type: 'clock', clock: this.link.clock });
+      this.pollClock();
+    }, CLOCK_POLL_MS);
+  }
+
+  private hasClockChanged(): boolean {
+    const clock = this.link.clock;
+    return clock?.offsetMs !== this.state.clock?.offsetMs || clock?.delayMs !== this.state.clock?.delayMs;
+  }
+
   private dispatch(action: RelayAction): void {
     this.state = reduceRelay(this.state, action);
     for (const [id, resolve] of this.waiting) {
@@ -444,10 +465,7 @@ export class RelayClient {
 
   private flush(): void {
     this.isFlushScheduled = false;
-    const clock = this.link.clock;
-    if (clock?.offsetMs !== this.state.clock?.offsetMs || clock?.delayMs !== this.state.clock?.delayMs) {
-      this.state = reduceRelay(this.state, { type: 'clock', clock });
-    }
+    if (this.hasClockChanged()) this.state = reduceRelay(this.state, { type: 'clock', clock: this.link.clock });
     this.snapshot = this.state;
     for (const listener of [...this.listeners]) listener();
   }

@@ -34,6 +34,7 @@ describe('formatAge', () => {
     [12_300, '12 s'],
     [250_000, '4 min'],
     [7_300_000, '2 h'],
+    [-40, '0.0 s'],
   ])('%i ms reads %s', (ms, text) => expect(formatAge(ms)).toBe(text));
 });
 
@@ -49,7 +50,7 @@ describe('formatMs', () => {
 describe('robotTarget', () => {
   it('reads branch, level and pose', () => {
     const s = withChannels(entry('robot/target', { branch: 'C', level: 'L4', xM: 3.9, yM: 5.1, headingDeg: -60 }));
-    expect(robotTarget(s)).toEqual({ label: 'Branch C · L4', pose: { xM: 3.9, yM: 5.1, headingDeg: -60 } });
+    expect(robotTarget(s)).toEqual({ label: 'C · L4', pose: { xM: 3.9, yM: 5.1, headingDeg: -60 } });
   });
 
   it('keeps a label without a pose when coordinates are missing, and is undefined with no target', () => {
@@ -70,7 +71,7 @@ describe('readouts', () => {
     expect(rows.map((r) => [r.label, r.text, r.unit, r.tone])).toEqual([
       ['Battery', '11.62', 'V', 'caution'],
       ['Elevator', '—', '', 'missing'],
-      ['State', 'to reef', '', 'normal'],
+      ['State', 'To reef', '', 'normal'],
       ['Game piece', '—', '', 'missing'],
     ]);
   });

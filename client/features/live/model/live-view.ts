@@ -23,6 +23,8 @@ export function channelAgeMs(entry: ChannelEntry, state: RelayState, localNowMs:
 /** "0.4 s", "12 s", "4 min", "2 h". */
 export function formatAge(ageMs: number): string {
   if (!Number.isFinite(ageMs)) return '—';
+  // Clock estimates can put a fresh value a hair in the future.
+  ageMs = Math.max(0, ageMs);
   if (ageMs < 10_000) return `${(ageMs / 1000).toFixed(1)} s`;
   if (ageMs < 60_000) return `${Math.floor(ageMs / 1000)} s`;
   if (ageMs < 3_600_000) return `${Math.floor(ageMs / 60_000)} min`;
@@ -75,7 +77,7 @@ export function robotTarget(state: RelayState): RobotTarget | undefined {
   const parsed = targetSchema.safeParse(entry.value);
   if (!parsed.success) return { label: formatValue(entry.value, 24) };
   const t = parsed.data;
-  const label = [t.branch && `Branch ${t.branch}`, t.level].filter(Boolean).join(' · ') || 'Target';
+  const label = [t.branch, t.level].filter(Boolean).join(' · ') || 'set';
   if (t.xM === undefined || t.yM === undefined) return { label };
   return { label, pose: { xM: t.xM, yM: t.yM, ...(t.headingDeg !== undefined ? { headingDeg: t.headingDeg } : {}) } };
 }
@@ -91,7 +93,10 @@ const READOUTS: { name: string; label: string; digits: number }[] = [
 
 /** A signal's value as text: enum labels, yes/no for booleans, numbers to `digits` places. */
 export function formatSignal(signal: Signal, value: number, digits = 2): string {
-  if (signal.type === 'enum') return signal.labels?.[Math.round(value)]?.replace(/_/g, ' ') ?? String(value);
+  if (signal.type === 'enum') {
+    const label = signal.labels?.[Math.round(value)]?.replace(/_/g, ' ');
+    return label ? label.charAt(0).toUpperCase() + label.slice(1) : String(value);
+  }
   if (signal.type === 'boolean') return value ? 'yes' : 'no';
   return value.toFixed(digits);
 }
@@ -123,15 +128,16 @@ export type ChannelRow = {
   rev: number;
 };
 
-/** op/ then robot/ channels, by name, with who set them, their age and ack state. */
+/** op/ then robot/ channels, by name, with who set them (the member's name while connected), age and ack state. */
 export function channelRows(state: RelayState, localNowMs: number): ChannelRow[] {
+  const principals = new Map((state.clients ?? []).map((c) => [c.sessionId, c.principal]));
   return Object.values(state.channels)
     .filter((e) => e.channel.startsWith('op/') || e.channel.startsWith('robot/'))
     .sort((a, b) => (a.channel.startsWith('op/') === b.channel.startsWith('op/') ? a.channel.localeCompare(b.channel) : a.channel.startsWith('op/') ? -1 : 1))
     .map((e) => ({
       channel: e.channel,
       value: formatValue(e.value),
-      setBy: `${e.from.name} (${RELAY_ROLE_LABELS[e.from.role].toLowerCase()})`,
+      setBy: `${principals.get(e.from.sessionId) ?? e.from.name} (${RELAY_ROLE_LABELS[e.from.role].toLowerCase()})`,
       ageMs: channelAgeMs(e, state, localNowMs),
       ack: e.channel.startsWith('op/') ? ((e.ackedRev ?? 0) >= e.rev ? 'acked' : 'waiting') : 'none',
       rev: e.rev,
