@@ -2,6 +2,7 @@
 import pg from 'pg';
 import { benchAuth } from '../bench/auth.bench';
 import { formatResults } from '../bench/bench-kit';
+import { benchRelay } from '../bench/relay.bench';
 import { connectDb } from '../db/client';
 import { withDatabase } from '../db/embedded-postgres';
 import { runMigrations } from '../db/migrate';
@@ -19,7 +20,9 @@ const handle = connectDb(withDatabase(database.url, name));
 try {
   await runMigrations(handle.db);
   process.stdout.write('Pitwall benchmarks (each figure per call; ratios against the baseline of this run)\n\n');
-  process.stdout.write(`auth and sessions\n${formatResults(await benchAuth(handle.db))}\n`);
+  process.stdout.write(`auth and sessions\n${formatResults(await benchAuth(handle.db))}\n\n`);
+  const fanoutSeconds = Number(process.env.PITWALL_BENCH_FANOUT_S ?? '60');
+  process.stdout.write(`relay\n${(await benchRelay({ databaseUrl: withDatabase(database.url, name), fanoutSeconds })).join('\n')}\n`);
 } finally {
   await handle.close();
   await admin.query(`drop database if exists ${name} with (force)`);

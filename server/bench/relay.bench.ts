@@ -1,0 +1,355 @@
+// Relay benchmarks of the relay issue, each against a raw baseline of the same run:
+//  1. tap → robot → ack round trip with 20 viewers and a 200-signal stream at 50 Hz, against a bare ws echo;
+//  2. fan-out of 200-signal batches at 50 Hz to 50 viewers (and one stuck viewer) for 60 s, with the server's
+//     CPU share;
+//  3. bytes on the wire per telemetry sample of the simulator's stream, against the field's bandwidth limit.
+import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { WebSocket } from 'ws';
+import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
+import { season2025 } from '../../shared/domain/season/season-2025';
+import { encodeFrame } from '../../shared/protocol/frame-codec';
+import type { ServerMessage, Signal } from '../../shared/protocol/messages';
+import { RelayLink, type SocketLike } from '../../shared/protocol/relay-link';
+import { encodeTelemetry } from '../../shared/protocol/telemetry-codec';
+import { runHeadlessMatch } from '../../simulator/src/headless';
+import { RobotClient } from '../../simulator/src/robot-client';
+import { DEMO_PASSWORD } from '../features/demo/demo-team';
+import { freePort } from '../db/embedded-postgres';
+import { PROJECT_ROOT } from '../runtime';
+
+export interface RelayBenchOptions {
+  databaseUrl: string;
+  fanoutSeconds: number;
+}
+
+const now = () => performance.timeOrigin + performance.now();
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+function quantile(sorted: number[], q: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))]!;
+}
+const summary = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return { n: s.length, p50: quantile(s, 0.5), p99: quantile(s, 0.99) };
+};
+
+const ms = (v: number) => `${v.toFixed(3)} ms`.padStart(9);
+
+/** A bare ws echo server on loopback, in its own process like the relay, and a client of it: the raw baseline. */
+async function startEcho(): Promise<{ roundTrip(): Promise<number>; stop(): Promise<void> }> {
+  const port = await freePort();
+  const server = spawn(process.execPath, ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bench/echo-server.ts'), String(port)], {
+    cwd: PROJECT_ROOT,
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  await new Promise<void>((resolve) => server.stdout!.once('data', () => resolve()));
+  const ws = new WebSocket(`ws://127.0.0.1:${port}`, { perMessageDeflate: false });
+  await new Promise((r) => ws.once('open', r));
+  const frame = encodeFrame({ type: 'publish', id: 1, channel: 'op/reef/level', value: 'L4' });
+  return {
+    roundTrip: () =>
+      new Promise<number>((resolve) => {
+        const t0 = performance.now();
+        ws.once('message', () => resolve(performance.now() - t0));
+        ws.send(frame);
+      }),
+    async stop() {
+      ws.close();
+      server.kill('SIGTERM');
+      await new Promise((r) => server.once('exit', r));
+    },
+  };
+}
+
+interface ServerChild {
+  child: ChildProcess;
+  url: string;
+  relayUrl: string;
+  stop(): Promise<void>;
+}
+
+async function startServerProcess(databaseUrl: string): Promise<ServerChild> {
+  const port = await freePort();
+  const dataDir = mkdtempSync(path.join(os.tmpdir(), 'pitwall-bench-'));
+  const child = spawn(process.execPath, ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bin/serve.ts')], {
+    cwd: PROJECT_ROOT,
+    env: { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), PITWALL_DATA_DIR: dataDir, LOG_LEVEL: 'warn' },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const url = `http://127.0.0.1:${port}`;
+  for (let i = 0; ; i += 1) {
+    const ok = await fetch(`${url}/api/health`).then((r) => r.ok, () => false);
+    if (ok) break;
+    if (i > 300) throw new Error('the bench server did not start');
+    await sleep(50);
+  }
+  return {
+    child,
+    url,
+    relayUrl: `ws://127.0.0.1:${port}/relay`,
+    async stop() {
+      child.kill('SIGTERM');
+      await new Promise((r) => child.once('exit', r));
+      rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+async function signIn(url: string, email: string): Promise<string> {
+  const csrf = ((await (await fetch(`${url}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
+  const res = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie: `pw_csrf=${csrf}`, 'x-csrf-token': csrf },
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+  });
+  const cookies = res.headers.getSetCookie().map((c) => c.split(';')[0]!);
+  return [...cookies, `pw_csrf=${csrf}`].join('; ') + `|${csrf}`;
+}
+
+async function createRobotKey(url: string): Promise<string> {
+  const [cookie, csrf] = (await signIn(url, 'lead@harborlight.example')).split('|') as [string, string];
+  const res = await fetch(`${url}/api/team/robot-keys`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf },
+    body: JSON.stringify({ name: 'Gullwing bench' }),
+  });
+  return ((await res.json()) as { secret: string }).secret;
+}
+
+/** A person's relay client for the bench; remembers when each publish and ack arrived. */
+class Viewer {
+  batches = 0;
+  // Several frames can arrive in one socket read, before a waiter is set: keep every arrival.
+  private readonly seen = new Map<string, { atMs: number; rev: number }>();
+  private readonly waiting = new Map<string, (hit: { atMs: number; rev: number }) => void>();
+  readonly link: RelayLink;
+
+  constructor(relayUrl: string, cookie: string, origin: string, kind: 'viewer' | 'panel') {
+    this.link = new RelayLink(
+      {
+        connect: () => new WebSocket(relayUrl, { headers: { cookie, origin }, perMessageDeflate: false }) as unknown as SocketLike,
+        now,
+        setTimer: (fn, ms) => setTimeout(fn, ms),
+        clearTimer: (h) => clearTimeout(h as NodeJS.Timeout),
+        random: Math.random,
+      },
+      { hello: { kind, name: `${kind} bench` } },
+      {
+        onOpen: () => kind === 'viewer' && this.link.send({ type: 'subscribe', prefixes: ['robot/', 'op/'] }),
+        onMessage: (m) => {
+          if (m.type === 'telemetry_batch') this.batches += 1;
+          else if (m.type === 'acked') this.arrived(`acked:${m.rev}`, m.rev);
+          else if (m.type === 'published') this.arrived(`published:${m.id}`, m.rev);
+          else if (m.type === 'error') process.stderr.write(`bench: relay error ${m.code}: ${m.message}\n`);
+        },
+      },
+    );
+    this.link.start();
+  }
+
+  private arrived(key: string, rev: number): void {
+    const hit = { atMs: performance.now(), rev };
+    this.seen.set(key, hit);
+    this.waiting.get(key)?.(hit);
+    this.waiting.delete(key);
+  }
+
+  private when(key: string): Promise<{ atMs: number; rev: number }> {
+    const hit = this.seen.get(key);
+    if (hit) return Promise.resolve(hit);
+    return new Promise((resolve) => this.waiting.set(key, resolve));
+  }
+
+  /** Publishes; resolves with the revision the relay gave it. */
+  async publish(id: number, channel: string, value: string): Promise<number> {
+    this.link.send({ type: 'publish', id, channel, value });
+    return (await this.when(`published:${id}`)).rev;
+  }
+
+  /** When the robot's ack of `rev` arrived (performance.now() time). */
+  async ackedAt(rev: number): Promise<number> {
+    return (await this.when(`acked:${rev}`)).atMs;
+  }
+}
+
+async function until(test: () => boolean, timeoutMs: number): Promise<boolean> {
+  const start = Date.now();
+  while (!test()) {
+    if (Date.now() - start > timeoutMs) return false;
+    await sleep(20);
+  }
+  return true;
+}
+
+const SIGNALS_200: Signal[] = Array.from({ length: 200 }, (_, index) => ({ index, name: `load/s${index}`, type: 'number', unit: '' }));
+
+/** A 200-signal stream at 50 Hz in batches of 5 ticks (10 batches a second), values that change every tick. */
+function startStream(robot: RobotClient): { stop(): void; sent(): number } {
+  robot.declareSignals(SIGNALS_200);
+  let tick = 0;
+  let sent = 0;
+  const timer = setInterval(() => {
+    const rows = Array.from({ length: 5 }, () => {
+      tick += 1;
+      return Array.from({ length: 200 }, (_, i) => Math.sin(tick / 10 + i) * 100);
+    });
+    robot.sendTelemetry(rows, tick * 20, 20);
+    sent += 1;
+  }, 100);
+  return { stop: () => clearInterval(timer), sent: () => sent };
+}
+
+const CLOCK_TICKS_PER_S = Number(execFileSync('getconf', ['CLK_TCK'], { encoding: 'utf8' }).trim()) || 100;
+
+/** User + system CPU time of a process so far (fields 14 and 15 of /proc/PID/stat). */
+function cpuSeconds(pid: number): number {
+  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+  return (Number(fields[11]) + Number(fields[12])) / CLOCK_TICKS_PER_S;
+}
+
+interface LoadProcess {
+  reset(): void;
+  report(): Promise<number[]>;
+  stop(): Promise<void>;
+}
+
+/** Starts `viewers` relay viewers (and `stuck` stuck ones) in a process of their own. */
+async function startLoad(server: ServerChild, cookie: string, viewers: number, stuck: number): Promise<LoadProcess> {
+  const child = spawn(
+    process.execPath,
+    ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bench/viewer-load.ts'), '--url', server.relayUrl, '--cookie', cookie, '--origin', server.url, '--viewers', String(viewers), '--stuck', String(stuck)],
+    { cwd: PROJECT_ROOT, stdio: ['pipe', 'pipe', 'inherit'] },
+  );
+  const lines: string[] = [];
+  const waiters: ((line: string) => void)[] = [];
+  let buffer = '';
+  child.stdout!.setEncoding('utf8');
+  child.stdout!.on('data', (chunk: string) => {
+    buffer += chunk;
+    for (let i = buffer.indexOf('\n'); i >= 0; i = buffer.indexOf('\n')) {
+      const line = buffer.slice(0, i);
+      buffer = buffer.slice(i + 1);
+      const waiter = waiters.shift();
+      if (waiter) waiter(line);
+      else lines.push(line);
+    }
+  });
+  const nextLine = () => (lines.length ? Promise.resolve(lines.shift()!) : new Promise<string>((resolve) => waiters.push(resolve)));
+  if ((await nextLine()) !== 'ready') throw new Error('the viewer load did not start');
+  return {
+    reset: () => child.stdin!.write('reset\n'),
+    async report() {
+      child.stdin!.write('report\n');
+      return (JSON.parse(await nextLine()) as { counts: number[] }).counts;
+    },
+    async stop() {
+      child.stdin!.write('quit\n');
+      await new Promise((r) => child.once('exit', r));
+    },
+  };
+}
+
+/** Times `count` round trips of `a` and of `b`, alternating; each resolves with its duration in ms. */
+async function interleaved(count: number, a: () => Promise<number>, b: () => Promise<number>) {
+  const as: number[] = [];
+  const bs: number[] = [];
+  for (let i = 0; i < count; i += 1) {
+    as.push(await a());
+    await sleep(3);
+    bs.push(await b());
+    await sleep(3);
+  }
+  return { a: summary(as), b: summary(bs) };
+}
+
+export async function benchRelay(options: RelayBenchOptions): Promise<string[]> {
+  const lines: string[] = [];
+  const echo = await startEcho();
+  const server = await startServerProcess(options.databaseUrl);
+  try {
+    const key = await createRobotKey(server.url);
+    const viewerCookie = (await signIn(server.url, 'viewer@harborlight.example')).split('|')[0]!;
+    const operatorCookie = (await signIn(server.url, 'operator@harborlight.example')).split('|')[0]!;
+    const robot = new RobotClient({
+      url: server.relayUrl,
+      key,
+      name: 'Gullwing bench',
+      onValue: (channel, _v, rev, retained) => {
+        if (!retained) robot.ack(channel, rev);
+      },
+    });
+    robot.start();
+    await until(() => robot.status === 'open', 5000);
+    const panel = new Viewer(server.relayUrl, operatorCookie, server.url, 'panel');
+    await until(() => panel.link.status === 'open', 5000);
+
+    let id = 0;
+    const tapOnce = async () => {
+      const t0 = performance.now();
+      const rev = await panel.publish((id += 1), 'op/reef/level', id % 2 ? 'L4' : 'L3');
+      return (await panel.ackedAt(rev)) - t0;
+    };
+    // Echo and tap alternate, so both meet the same moments of a noisy machine; the first 200 warm up.
+    await interleaved(200, echo.roundTrip, tapOnce);
+    const quiet = await interleaved(500, echo.roundTrip, tapOnce);
+    const load = await startLoad(server, viewerCookie, 20, 0);
+    const stream = startStream(robot);
+    await sleep(500);
+    const loaded = await interleaved(500, echo.roundTrip, tapOnce);
+    const viewerCounts = await load.report();
+    await load.stop();
+    const row = (label: string, r: { p50: number; p99: number }) => `  ${label.padEnd(52)} p50 ${ms(r.p50)}   p99 ${ms(r.p99)}`;
+    lines.push(row('bare ws echo on loopback, quiet (baseline)', quiet.a));
+    lines.push(`${row('tap → robot → ack, quiet', quiet.b)}   p99 ${(quiet.b.p99 / quiet.a.p99).toFixed(2)}× the echo`);
+    lines.push(row('bare ws echo, with the load below (baseline)', loaded.a));
+    lines.push(
+      `${row('tap → robot → ack, 20 viewers + 200 signals @ 50 Hz', loaded.b)}   p99 ${(loaded.b.p99 / loaded.a.p99).toFixed(2)}× the echo ` +
+        `(target ≤ 2×; a tap is two round trips); viewers got ${Math.min(...viewerCounts)}–${Math.max(...viewerCounts)} batches`,
+    );
+
+    const fan = await startLoad(server, viewerCookie, 50, 1);
+    await sleep(300);
+    fan.reset();
+    const sentBefore = stream.sent();
+    const cpuBefore = cpuSeconds(server.child.pid!);
+    const wallBefore = performance.now();
+    await sleep(options.fanoutSeconds * 1000);
+    const sentDuring = stream.sent() - sentBefore;
+    const cpu = cpuSeconds(server.child.pid!) - cpuBefore;
+    const wall = (performance.now() - wallBefore) / 1000;
+    stream.stop();
+    await sleep(1000);
+    const received = await fan.report();
+    await fan.stop();
+    const lost = received.filter((n) => n < sentDuring).length;
+    lines.push(
+      `  fan-out to 50 viewers + 1 stuck, ${options.fanoutSeconds} s                ${sentDuring} batches (${(sentDuring * 5 * 200).toLocaleString('en')} samples) each; ` +
+        `healthy viewers with loss: ${lost}/50 (fewest received ${Math.min(...received)}); server CPU ${((cpu / wall) * 100).toFixed(1)} % of one core`,
+    );
+    panel.link.stop();
+    robot.stop();
+  } finally {
+    await server.stop();
+    await echo.stop();
+  }
+  // Bytes on the wire for the simulator's own stream (one headless match, batches of 5 ticks).
+  const match = runHeadlessMatch({ seed: 7, season: season2025, robot: DEFAULT_ROBOT_PROFILE, alliance: 'blue' });
+  let bytes = 0;
+  for (const b of match.batches) {
+    const data = encodeTelemetry(b.rows, match.signals.length);
+    bytes += encodeFrame({ type: 'telemetry_batch', seq: b.seq, t0Ms: b.t0Ms, dtMs: b.dtMs, ticks: b.ticks, data }).byteLength;
+  }
+  const samples = match.batches.reduce((n, b) => n + b.ticks, 0) * match.signals.length;
+  const durationS = (match.batches.at(-1)!.t0Ms + match.batches.at(-1)!.ticks * 20) / 1000;
+  const mbps = (bytes * 8) / durationS / 1e6;
+  // Per-robot bandwidth between robot and operator console: 7 Mbit/s with the 2025 radio, 4 Mbit/s with the
+  // older one (game manual R704, FACTS.md).
+  lines.push(
+    `  simulator stream on the wire                     ${(bytes / samples).toFixed(2)} B/sample (target ≤ 4; raw float32 = 4.00), ` +
+      `${mbps.toFixed(3)} Mbit/s = ${((mbps / 7) * 100).toFixed(1)} % of the 7 Mbit/s limit (${((mbps / 4) * 100).toFixed(1)} % of 4 Mbit/s)`,
+  );
+  return lines;
+}
