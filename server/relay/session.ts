@@ -115,7 +115,7 @@ export class RelaySession {
 
   /** Takes the clock sample of a pong: server t1/t4, client t2/t3. */
   clockSample(sample: ClockSample): void {
-    this.rttMs = sample.delayMs;
+    this.rttMs = Math.max(0, sample.delayMs);
     this.clock.add(sample);
     this.offsetMs = this.clock.best()?.offsetMs ?? 0;
   }

@@ -77,6 +77,8 @@ export function startLiveRobot(options: LiveRobotOptions): LiveRobot {
 
   client.start();
   const startedMs = Date.now();
+  // Robot time is the clock the robot client syncs with the relay (RFC 5905), so the relay can map it.
+  const robotEpochMs = performance.timeOrigin + performance.now();
   let ticks = 0;
   let rows: Float32Array[] = [];
   let batchT0Ms = 0;
@@ -87,8 +89,8 @@ export function startLiveRobot(options: LiveRobotOptions): LiveRobot {
   let targets = targetsOf();
 
   function tick(): void {
-    const robotMs = ticks * TICK_MS;
-    const { phase, matchTimeS } = phaseAt(robotMs / 1000);
+    const robotMs = robotEpochMs + ticks * TICK_MS;
+    const { phase, matchTimeS } = phaseAt((ticks * TICK_MS) / 1000);
     if (phase !== lastPhase) {
       if (phase === 'pre') {
         matchNumber += 1;

@@ -59,4 +59,10 @@ describe('the simulator on the relay', () => {
     expect(declaration.signals.length).toBeGreaterThanOrEqual(100);
     await operator.next((m) => m.type === 'telemetry_batch', 2000, false);
   });
+
+  it('stamps events in robot time that the relay maps to server time', async () => {
+    operator.send({ type: 'publish', id: 2, channel: 'op/reef/branch', value: 'H' });
+    const event = await operator.next<Extract<ServerMessage, { type: 'event' }>>((m) => m.type === 'event' && m.kind === 'target_changed', 3000, false);
+    expect(Math.abs(event.tMs + event.offsetMs - Date.now())).toBeLessThan(1000);
+  });
 });

@@ -27,8 +27,8 @@ export function Component() {
       />
       <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <Section
-          title="What Pitwall will do for the team"
-          description="These areas arrive in coming releases. Each one says what it will do and who on the subteam uses it."
+          title="What Pitwall does for the team"
+          description="Each area says what it does and who on the subteam uses it. Those marked soon arrive in coming releases."
         >
           <ul className="grid gap-3 sm:grid-cols-2">
             {AREAS.map((area) => (
@@ -43,7 +43,9 @@ export function Component() {
                   <span className="min-w-0">
                     <span className="flex items-center gap-2 font-semibold text-asphalt-100">
                       {area.label}
-                      <span className="text-2xs font-semibold tracking-[0.12em] text-asphalt-500 uppercase">Soon</span>
+                      {!area.isAvailable && (
+                        <span className="text-2xs font-semibold tracking-[0.12em] text-asphalt-500 uppercase">Soon</span>
+                      )}
                     </span>
                     <span className="mt-0.5 block text-sm text-asphalt-400">{area.tagline}</span>
                   </span>

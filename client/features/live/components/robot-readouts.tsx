@@ -8,7 +8,7 @@ function Tile({ label, children, hint }: { label: string; children: ReactNode; h
   return (
     <div className="min-w-0 rounded-lg bg-asphalt-900 px-3 py-2.5 ring-1 ring-asphalt-750">
       <dt className="text-2xs font-semibold tracking-[0.14em] text-asphalt-400 uppercase">{label}</dt>
-      <dd className="mt-0.5 truncate">{children}</dd>
+      <dd className="mt-0.5 leading-tight break-words">{children}</dd>
       {hint && <dd className="truncate text-2xs text-asphalt-500">{hint}</dd>}
     </div>
   );
@@ -23,7 +23,7 @@ export function RobotReadouts({ readouts, target }: { readouts: readonly Readout
       </Tile>
       {readouts.map((r) => (
         <Tile key={r.name} label={r.label} hint={r.tone === 'missing' ? 'not sent' : undefined}>
-          <span className={cx('text-lg font-semibold', r.unit && 'num', TONE[r.tone])}>{r.text}</span>
+          <span className={cx('font-semibold', r.unit ? 'num text-lg' : 'text-base', TONE[r.tone])}>{r.text}</span>
           {r.unit && <span className="ml-1 text-sm text-asphalt-400">{r.unit}</span>}
         </Tile>
       ))}

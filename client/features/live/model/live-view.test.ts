@@ -67,9 +67,9 @@ describe('readouts', () => {
   ];
 
   it('formats declared signals and marks the ones the robot does not send', () => {
-    const rows = readouts({ robot: 'Gullwing', signals, trail: [], latest: { tMs: 0, values: { 'battery/voltage': 11.62, 'state/machine': 1 } } });
+    const rows = readouts({ robot: 'Gullwing', signals, trail: [], latest: { tMs: 0, values: { 'battery/voltage': 9.62, 'state/machine': 1 } } });
     expect(rows.map((r) => [r.label, r.text, r.unit, r.tone])).toEqual([
-      ['Battery', '11.62', 'V', 'caution'],
+      ['Battery', '9.62', 'V', 'caution'],
       ['Elevator', '—', '', 'missing'],
       ['State', 'To reef', '', 'normal'],
       ['Game piece', '—', '', 'missing'],

@@ -101,9 +101,11 @@ export function formatSignal(signal: Signal, value: number, digits = 2): string 
   return value.toFixed(digits);
 }
 
+// Under load a healthy battery dips well below its resting 12–13 V; near 7 V the robot controller browns out
+// (from memory). Thresholds: common practice, no source.
 function batteryTone(volts: number): Readout['tone'] {
-  if (volts < 11) return 'stop';
-  if (volts < 12) return 'caution';
+  if (volts < 8) return 'stop';
+  if (volts < 10) return 'caution';
   return 'normal';
 }
 
