@@ -86,3 +86,24 @@ describe('FieldDrawing', () => {
     expect('default' in mod).toBe(false);
   });
 });
+
+describe('turnedWindow', () => {
+  it('turns a window 180° about the field centre (red view)', () => {
+    // The blue reef's close-up window maps onto the red reef's, by the field's 180° symmetry (FACTS.md).
+    const turned = mod.turnedWindow({ xMinM: 3, xMaxM: 6, yMinM: 2.5, yMaxM: 5.5 }, 17.548, 8.052);
+    expect(turned.xMinM).toBeCloseTo(11.548, 9);
+    expect(turned.xMaxM).toBeCloseTo(14.548, 9);
+    expect(turned.yMinM).toBeCloseTo(2.552, 9);
+    expect(turned.yMaxM).toBeCloseTo(5.552, 9);
+  });
+});
+
+describe('FieldDrawing viewFrom', () => {
+  it('turns the field for the red view and keeps letters upright', () => {
+    const red = renderToStaticMarkup(createElement(FieldDrawing, { season: season2025, viewFrom: 'red' }));
+    expect(red).toContain('rotate(180 8.774 4.026)');
+    expect(red).toContain('rotate(-180) scale(1 -1)');
+    expect(render()).toContain('rotate(0 8.774 4.026)');
+  });
+});
+

@@ -1,3 +1,4 @@
+import { createContext, useContext } from 'react';
 import { robotFootprint } from '../../../shared/domain/geometry/footprint';
 import type { Point2d } from '../../../shared/domain/geometry/pose2d';
 import { fieldPlan, type FieldPlan, type Segment } from '../../../shared/domain/season/field-plan';
@@ -51,6 +52,11 @@ export type FieldDrawingProps = {
   onTargetHover?: (id: string | null) => void;
   /** A click or tap on a target marker. */
   onTargetSelect?: (id: string) => void;
+  /**
+   * Whose side to draw it from: `blue` (default) puts the blue alliance wall on the left as the field layout
+   * does; `red` turns the field 180° about its centre so the red wall is on the left, letters kept upright.
+   */
+  viewFrom?: Alliance;
   /** Accessible name of the drawing. */
   title?: string;
   className?: string;
@@ -58,11 +64,15 @@ export type FieldDrawingProps = {
 
 const pointsAttr = (points: readonly Point2d[]) => points.map((p) => `${p.xM},${p.yM}`).join(' ');
 
+/** Degrees the field is turned for the viewer; text turns back by as much to stay upright. */
+const ViewTurn = createContext(0);
+
 /** Upright text at a field point inside the y-flipped group. */
 function Label({ at, text, size = LETTER_M }: { at: Point2d; text: string; size?: number }) {
+  const turnDeg = useContext(ViewTurn);
   return (
     <text
-      transform={`translate(${at.xM} ${at.yM}) scale(1 -1)`}
+      transform={`translate(${at.xM} ${at.yM}) rotate(${-turnDeg}) scale(1 -1)`}
       fontSize={size}
       textAnchor="middle"
       dominantBaseline="central"
@@ -107,6 +117,11 @@ type TargetHandlers = Pick<FieldDrawingProps, 'onTargetHover' | 'onTargetSelect'
 /** The SVG viewBox of a field window: y is negated because the drawing flips it inside scale(1, −1). */
 export function windowViewBox(w: FieldWindow): FieldPlan['viewBox'] {
   return { minX: w.xMinM, minY: -w.yMaxM, width: w.xMaxM - w.xMinM, height: w.yMaxM - w.yMinM };
+}
+
+/** The same window as seen after turning the field 180° about its centre (the red alliance's view). */
+export function turnedWindow(w: FieldWindow, lengthM: number, widthM: number): FieldWindow {
+  return { xMinM: lengthM - w.xMaxM, xMaxM: lengthM - w.xMinM, yMinM: widthM - w.yMaxM, yMaxM: widthM - w.yMinM };
 }
 
 function Layer({ layer, onTargetHover, onTargetSelect }: { layer: FieldLayer } & TargetHandlers) {
@@ -174,9 +189,15 @@ export function FieldDrawing({
   className,
   onTargetHover,
   onTargetSelect,
+  viewFrom = 'blue',
 }: FieldDrawingProps) {
   const plan = fieldPlan(season);
-  const { minX, minY, width, height } = window ? windowViewBox(window) : plan.viewBox;
+  const lengthM = season.field.lengthM.value;
+  const widthM = season.field.widthM.value;
+  const turnDeg = viewFrom === 'red' ? 180 : 0;
+  const shown = window && turnDeg ? turnedWindow(window, lengthM, widthM) : window;
+  // The whole field's margin is the same on every side, so its viewBox does not change when turned.
+  const { minX, minY, width, height } = shown ? windowViewBox(shown) : plan.viewBox;
   return (
     <svg
       viewBox={`${minX} ${minY} ${width} ${height}`}
@@ -186,7 +207,8 @@ export function FieldDrawing({
       preserveAspectRatio="xMidYMid meet"
     >
       <title>{title}</title>
-      <g transform="scale(1 -1)">
+      <ViewTurn.Provider value={turnDeg}>
+      <g transform={`scale(1 -1) rotate(${turnDeg} ${lengthM / 2} ${widthM / 2})`} data-view-from={viewFrom}>
         <polygon points={pointsAttr(plan.outline)} fill={SURFACE} stroke={INK} strokeWidth={LINE_M * 2} />
         <SegmentLine segment={plan.centreLine} colour={STRUCTURE} widthM={LINE_M} dash="0.1 0.1" />
         {plan.startingLines.map((s) => (
@@ -258,6 +280,7 @@ export function FieldDrawing({
           <Layer key={`${layer.kind}-${layer.id}`} layer={layer} onTargetHover={onTargetHover} onTargetSelect={onTargetSelect} />
         ))}
       </g>
+      </ViewTurn.Provider>
     </svg>
   );
 }

@@ -55,6 +55,7 @@ export function TargetsField(props: TargetsFieldProps) {
           className={view === 'reef' ? 'aspect-square w-full' : 'aspect-[2.1] w-full'}
           onTargetHover={onHover}
           onTargetSelect={onSelect}
+          viewFrom={alliance}
         />
       </div>
       <figcaption className="flex flex-wrap gap-x-4 gap-y-1 text-sm text-asphalt-400">
@@ -68,7 +69,10 @@ export function TargetsField(props: TargetsFieldProps) {
           <span aria-hidden="true" className="size-3 rounded-xs border border-signal-500 bg-signal-500/35" />
           {robotName}, bumper to bumper
         </span>
-        <span>To scale; blue-origin field coordinates, seen from above.</span>
+        <span>
+          To scale, seen from above with the {allianceName} alliance wall on the left; the table gives blue-origin field
+          coordinates.
+        </span>
       </figcaption>
     </figure>
   );
