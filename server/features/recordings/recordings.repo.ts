@@ -1,0 +1,206 @@
+import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
+import type { ChannelValue, Signal } from '../../../shared/protocol/messages';
+import type { Db } from '../../db/client';
+import type { Executor } from '../../db/executor';
+import { recordingChunks, recordingEvents, recordings, recordingSignals, recordingStreamSeqs } from '../../db/schema/index';
+import { packTimes, unpackTimes, type Chunk } from './chunks';
+
+export type RecordingRow = typeof recordings.$inferSelect;
+export type NewRecording = Pick<
+  typeof recordings.$inferInsert,
+  'teamId' | 'robot' | 'robotKeyId' | 'streamId' | 'kind' | 'source' | 'originTMs' | 'startedAt'
+>;
+
+export interface StoredEvent {
+  seq: number;
+  tMs: number;
+  kind: string;
+  data: Record<string, ChannelValue> | null;
+}
+
+export interface SignalChunk extends Chunk {
+  signalIndex: number;
+}
+
+const buffer = (b: Uint8Array) => Buffer.from(b.buffer, b.byteOffset, b.byteLength);
+const lastTickMs = (c: Chunk) => (c.timesMs ? c.timesMs[c.ticks - 1]! : c.t0Ms + (c.ticks - 1) * c.dtMs);
+
+export function recordingsRepo(db: Executor) {
+  return {
+    async findByStream(teamId: string, streamId: string): Promise<RecordingRow | undefined> {
+      const [row] = await db
+        .select()
+        .from(recordings)
+        .where(and(eq(recordings.teamId, teamId), eq(recordings.streamId, streamId)));
+      return row;
+    },
+
+    async find(teamId: string, id: string): Promise<RecordingRow | undefined> {
+      const [row] = await db
+        .select()
+        .from(recordings)
+        .where(and(eq(recordings.teamId, teamId), eq(recordings.id, id)));
+      return row;
+    },
+
+    /** Creates the stream's recording, or returns the one a concurrent writer created first. */
+    async insertRecording(input: NewRecording): Promise<RecordingRow> {
+      const [row] = await db.insert(recordings).values(input).onConflictDoNothing().returning();
+      return row ?? (await this.findByStream(input.teamId, input.streamId))!;
+    },
+
+    async countSignals(recordingId: string): Promise<number> {
+      const [row] = await db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(recordingSignals)
+        .where(eq(recordingSignals.recordingId, recordingId));
+      return row!.n;
+    },
+
+    async insertSignals(recordingId: string, signals: readonly Signal[]): Promise<void> {
+      if (signals.length === 0) return;
+      await db
+        .insert(recordingSignals)
+        .values(signals.map((s) => ({ recordingId, index: s.index, name: s.name, type: s.type, unit: s.unit, labels: s.labels ?? null })))
+        .onConflictDoNothing();
+    },
+
+    async listSignals(recordingId: string): Promise<Signal[]> {
+      const rows = await db
+        .select()
+        .from(recordingSignals)
+        .where(eq(recordingSignals.recordingId, recordingId))
+        .orderBy(asc(recordingSignals.index));
+      return rows.map((r) => ({ index: r.index, name: r.name, type: r.type, unit: r.unit, ...(r.labels ? { labels: r.labels } : {}) }));
+    },
+
+    /** Records the seqs as stored; returns those that were not stored before. */
+    async claimSeqs(recordingId: string, seqs: readonly number[]): Promise<Set<number>> {
+      if (seqs.length === 0) return new Set();
+      const result = await db.execute<{ seq: number }>(sql`
+        insert into ${recordingStreamSeqs} (recording_id, seq)
+        select ${recordingId}::uuid, s from unnest(${sql.param(seqs)}::int[]) as s
+        on conflict do nothing
+        returning seq`);
+      return new Set(result.rows.map((r) => r.seq));
+    },
+
+    async insertChunks(recordingId: string, chunks: readonly SignalChunk[]): Promise<void> {
+      if (chunks.length === 0) return;
+      await db.execute(sql`
+        insert into ${recordingChunks} (recording_id, signal_index, first_seq, t0_ms, t_last_ms, dt_ms, ticks, times_ms, values)
+        select ${recordingId}::uuid, * from unnest(
+          ${sql.param(chunks.map((c) => c.signalIndex))}::int[],
+          ${sql.param(chunks.map((c) => c.firstSeq))}::int[],
+          ${sql.param(chunks.map((c) => c.t0Ms))}::float8[],
+          ${sql.param(chunks.map(lastTickMs))}::float8[],
+          ${sql.param(chunks.map((c) => c.dtMs))}::float8[],
+          ${sql.param(chunks.map((c) => c.ticks))}::int[],
+          ${sql.param(chunks.map((c) => (c.timesMs ? buffer(packTimes(c.timesMs)) : null)))}::bytea[],
+          ${sql.param(chunks.map((c) => buffer(c.values)))}::bytea[])`);
+    },
+
+    async insertEvents(recordingId: string, events: readonly StoredEvent[]): Promise<void> {
+      if (events.length === 0) return;
+      await db.insert(recordingEvents).values(events.map((e) => ({ recordingId, ...e })));
+    },
+
+    async extendDuration(recordingId: string, durationMs: number): Promise<void> {
+      await db
+        .update(recordings)
+        .set({ durationMs: sql`greatest(${recordings.durationMs}, ${durationMs})` })
+        .where(eq(recordings.id, recordingId));
+    },
+
+    async finish(recordingId: string, endedAt: Date): Promise<void> {
+      await db.update(recordings).set({ status: 'finished', endedAt }).where(eq(recordings.id, recordingId));
+    },
+
+    /** One signal's chunks in seq order, those overlapping [fromMs, toMs] (robot time) when given. */
+    async readChunks(recordingId: string, signalIndex: number, range: { fromMs?: number; toMs?: number } = {}): Promise<Chunk[]> {
+      const rows = await db
+        .select({
+          firstSeq: recordingChunks.firstSeq,
+          t0Ms: recordingChunks.t0Ms,
+          dtMs: recordingChunks.dtMs,
+          ticks: recordingChunks.ticks,
+          timesMs: recordingChunks.timesMs,
+          values: recordingChunks.values,
+        })
+        .from(recordingChunks)
+        .where(
+          and(
+            eq(recordingChunks.recordingId, recordingId),
+            eq(recordingChunks.signalIndex, signalIndex),
+            range.toMs === undefined ? undefined : lte(recordingChunks.t0Ms, range.toMs),
+            range.fromMs === undefined ? undefined : gte(recordingChunks.tLastMs, range.fromMs),
+          ),
+        )
+        .orderBy(asc(recordingChunks.firstSeq));
+      return rows.map((r) => ({ ...r, timesMs: r.timesMs ? unpackTimes(r.timesMs) : null }));
+    },
+
+    /** Every chunk from the first one shorter than maxTicks on, for merging; locked until the transaction ends. */
+    async chunksToCompact(recordingId: string, maxTicks: number): Promise<SignalChunk[]> {
+      const rows = await db.execute<{
+        signal_index: number;
+        first_seq: number;
+        t0_ms: number;
+        dt_ms: number;
+        ticks: number;
+        times_ms: Buffer | null;
+        values: Buffer;
+      }>(sql`
+        select signal_index, first_seq, t0_ms, dt_ms, ticks, times_ms, values from ${recordingChunks}
+        where recording_id = ${recordingId}
+          and first_seq >= (select coalesce(min(first_seq), 2147483647) from ${recordingChunks}
+                            where recording_id = ${recordingId} and ticks < ${maxTicks})
+        order by signal_index, first_seq
+        for update`);
+      return rows.rows.map((r) => ({
+        signalIndex: r.signal_index,
+        firstSeq: r.first_seq,
+        t0Ms: r.t0_ms,
+        dtMs: r.dt_ms,
+        ticks: r.ticks,
+        timesMs: r.times_ms ? unpackTimes(r.times_ms) : null,
+        values: r.values,
+      }));
+    },
+
+    async deleteChunks(recordingId: string, keys: readonly { signalIndex: number; firstSeq: number }[]): Promise<void> {
+      if (keys.length === 0) return;
+      await db.execute(sql`
+        delete from ${recordingChunks} c
+        using unnest(${sql.param(keys.map((k) => k.signalIndex))}::int[], ${sql.param(keys.map((k) => k.firstSeq))}::int[]) as k(signal_index, first_seq)
+        where c.recording_id = ${recordingId} and c.signal_index = k.signal_index and c.first_seq = k.first_seq`);
+    },
+
+    async listEvents(recordingId: string): Promise<StoredEvent[]> {
+      return db
+        .select({ seq: recordingEvents.seq, tMs: recordingEvents.tMs, kind: recordingEvents.kind, data: recordingEvents.data })
+        .from(recordingEvents)
+        .where(eq(recordingEvents.recordingId, recordingId))
+        .orderBy(asc(recordingEvents.seq));
+    },
+
+    async listStoredSeqs(recordingId: string): Promise<number[]> {
+      const rows = await db
+        .select({ seq: recordingStreamSeqs.seq })
+        .from(recordingStreamSeqs)
+        .where(eq(recordingStreamSeqs.recordingId, recordingId))
+        .orderBy(asc(recordingStreamSeqs.seq));
+      return rows.map((r) => r.seq);
+    },
+  };
+}
+
+export type RecordingsRepo = ReturnType<typeof recordingsRepo>;
+
+export function recordingsStore(db: Db) {
+  return {
+    ...recordingsRepo(db),
+    transaction: <T>(fn: (repo: RecordingsRepo) => Promise<T>): Promise<T> => db.transaction((tx) => fn(recordingsRepo(tx))),
+  };
+}
+export type RecordingsStore = ReturnType<typeof recordingsStore>;
