@@ -2,6 +2,7 @@
 import pg from 'pg';
 import { benchAuth } from '../bench/auth.bench';
 import { formatResults } from '../bench/bench-kit';
+import { benchRecordings } from '../bench/recordings.bench';
 import { benchRelay } from '../bench/relay.bench';
 import { connectDb } from '../db/client';
 import { withDatabase } from '../db/embedded-postgres';
@@ -23,6 +24,8 @@ try {
   process.stdout.write(`auth and sessions\n${formatResults(await benchAuth(handle.db))}\n\n`);
   const fanoutSeconds = Number(process.env.PITWALL_BENCH_FANOUT_S ?? '60');
   process.stdout.write(`relay\n${(await benchRelay({ databaseUrl: withDatabase(database.url, name), fanoutSeconds })).join('\n')}\n`);
+  const recordings = await benchRecordings(handle.db, { databaseUrl: withDatabase(database.url, name) });
+  process.stdout.write(`\nrecording storage\n${recordings.join('\n')}\n`);
 } finally {
   await handle.close();
   await admin.query(`drop database if exists ${name} with (force)`);
