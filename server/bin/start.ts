@@ -12,7 +12,14 @@ async function main(): Promise<void> {
   const logger = createLogger(env.LOG_LEVEL, { human: true });
   buildClientIfStale((line) => logger.info(line));
   const database = await provideDatabase(env, logger);
-  const running = await startServer({ env, logger, databaseUrl: database.url, seed: true });
+  const running = await startServer({ env, logger, databaseUrl: database.url, seed: true }).catch(async (err: unknown) => {
+    // Leave nothing running behind a failed start.
+    await database.stop();
+    if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE') {
+      throw new Error(`port ${env.PORT} on ${env.HOST} is in use: stop what runs there or start with PORT=5811 npm start`);
+    }
+    throw err;
+  });
   const simulator = env.PITWALL_SIMULATOR && running.simulatorKeyFile ? startSimulator(running.relayUrl, running.simulatorKeyFile) : undefined;
 
   const width = Math.max(...DEMO_MEMBERS.map((m) => m.email.length));
