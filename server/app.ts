@@ -9,6 +9,10 @@ import { createAuthService } from './features/auth/auth.service';
 import { checkCsrf, loadSession, type CookiePolicy } from './features/auth/session.middleware';
 import { createSessionTokens } from './features/auth/session-token';
 import { healthRouter } from './features/health/health.routes';
+import { recorderRepo } from './features/recorder/recorder.repo';
+import { createRecorder, type RecorderOptions } from './features/recorder/recorder.service';
+import { recordingsStore } from './features/recordings/recordings.repo';
+import { createRecordingsService } from './features/recordings/recordings.service';
 import type { DevInbox } from './features/mail/fake-smtp';
 import type { Mailer } from './features/mail/mailer';
 import { robotProfileRepo } from './features/season/robot-profile.repo';
@@ -21,7 +25,7 @@ import { AppError, errorHandler } from './lib/errors';
 import type { Logger } from './lib/logger';
 import { createRelay, type Relay, type RelayDeps } from './relay/relay-server';
 import { relayAuthenticators } from './relay/relay-auth';
-import { MemoryTelemetryStore, type TelemetryStore } from './relay/telemetry-store';
+import type { TelemetryStore } from './relay/telemetry-store';
 
 export interface AppDeps {
   db: Db;
@@ -37,8 +41,13 @@ export interface AppDeps {
   clientDir?: string;
   signInLimit?: SignInLimit;
   now?: () => Date;
-  /** Where the relay stores robot telemetry before confirming it; in memory by default. */
+  /**
+   * Where the relay stores robot telemetry before confirming it. By default the recorder, which writes each
+   * match of a robot to PostgreSQL as a recording; a store given here replaces it (and no recorder runs).
+   */
   telemetryStore?: TelemetryStore;
+  /** Recorder timing (tests shorten the disconnect grace). */
+  recorder?: Partial<Pick<RecorderOptions, 'graceMs' | 'tailMs' | 'autoGapMs' | 'preRollMs'>>;
   /** Relay timing and limits (tests shorten them). */
   relay?: Partial<Pick<RelayDeps, 'heartbeatMs' | 'staleMs' | 'viewerStaleMs' | 'maxFrameBytes' | 'limits' | 'helloTimeoutMs'>>;
 }
@@ -51,6 +60,8 @@ export interface App {
     auth: ReturnType<typeof createAuthService>;
     team: ReturnType<typeof createTeamService>;
     season: ReturnType<typeof createSeasonService>;
+    recordings: ReturnType<typeof createRecordingsService>;
+    recorder: ReturnType<typeof createRecorder>;
   };
 }
 
@@ -67,9 +78,12 @@ export function createApp(deps: AppDeps): App {
     ...common,
     onRobotKeyRevoked: (keyId) => relay?.disconnectKey(keyId),
   });
+  const recordings = createRecordingsService({ store: recordingsStore(deps.db), now });
+  const recorder = createRecorder({ recordings, repo: recorderRepo(deps.db), logger: deps.logger, ...deps.recorder });
   relay = createRelay({
     ...relayAuthenticators({ tokens, auth, team }),
-    store: deps.telemetryStore ?? new MemoryTelemetryStore(),
+    store: deps.telemetryStore ?? recorder.store,
+    observer: deps.telemetryStore ? undefined : recorder.observer,
     logger: deps.logger,
     ...deps.relay,
   });
@@ -100,5 +114,5 @@ export function createApp(deps: AppDeps): App {
   }
   app.use(errorHandler(deps.logger));
 
-  return { express: app, relay, services: { auth, team, season } };
+  return { express: app, relay, services: { auth, team, season, recordings, recorder } };
 }

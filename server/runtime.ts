@@ -127,6 +127,8 @@ export async function startServer({ env, logger, databaseUrl, seed }: StartOptio
     devInbox: mail.fake?.inbox,
     async stop() {
       await app.relay.close();
+      app.services.recorder.close();
+      await app.services.recorder.settle();
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await mail.fake?.close();

@@ -9,6 +9,7 @@ import { onWire } from '../../shared/protocol/clock-sync';
 import {
   CLOSE,
   PROTOCOL_VERSION,
+  type ChannelValue,
   type ClientMessage,
   type RelayErrorCode,
   type RobotEvent,
@@ -19,7 +20,7 @@ import {
 import type { Logger } from '../lib/logger';
 import { DEFAULT_LIMITS, RelaySession, type SessionIdentity, type SessionLimits } from './session';
 import { STREAM_CHANNELS, TeamHub } from './team-hub';
-import type { DurableMessage, StreamRef, TelemetryStore } from './telemetry-store';
+import type { DurableMessage, StreamObserver, StreamRef, TelemetryStore } from './telemetry-store';
 
 export type Principal = Omit<SessionIdentity, 'sessionId'>;
 
@@ -29,6 +30,8 @@ export interface RelayDeps {
   /** The robot behind a key, or undefined for an unknown or revoked key. */
   authenticateRobot(secret: string): Promise<Principal | undefined>;
   store: TelemetryStore;
+  /** Told of robot connections, modes, selections and acks as they happen (the recorder). */
+  observer?: StreamObserver;
   logger: Logger;
   now?: () => number;
   limits?: Partial<SessionLimits>;
@@ -141,12 +144,17 @@ export function createRelay(deps: RelayDeps): Relay {
           return fail(s, 'forbidden', `a ${s.role} may not publish ${message.channel}`, { id: message.id, channel: message.channel });
         }
         const entry = hub.publish(s, message.channel, message.value);
+        if (deps.observer) observePublish(s, message.channel, message.value, entry.rev);
         return s.send({ type: 'published', id: message.id, channel: message.channel, rev: entry.rev }, 'reliable');
       }
       case 'ack':
         if (s.role !== 'robot') return fail(s, 'not_a_robot', 'only a robot acknowledges', { channel: message.channel });
-        if (!hub.ack(s, message.channel, message.rev)) return fail(s, 'bad_frame', `no revision ${message.rev} of ${message.channel}`);
+      {
+        const relayRttMs = hub.ack(s, message.channel, message.rev);
+        if (relayRttMs === undefined) return fail(s, 'bad_frame', `no revision ${message.rev} of ${message.channel}`);
+        deps.observer?.ack(streamFor(s).ref, { channel: message.channel, rev: message.rev, relayRttMs, serverMs: now() });
         return;
+      }
       case 'ping':
         return s.send({ type: 'pong', t1: message.t1, t2: now(), t3: now() }, 'reliable');
       case 'pong': {
@@ -163,6 +171,11 @@ export function createRelay(deps: RelayDeps): Relay {
       default:
         return assertNever(message);
     }
+  }
+
+  function observePublish(s: RelaySession, channel: string, value: ChannelValue, rev: number): void {
+    if (s.role === 'robot') deps.observer!.robotValue(streamFor(s).ref, channel, value);
+    else if (channel.startsWith('op/')) deps.observer!.selection(s.identity.teamId, { channel, value, rev, from: s.sender(), serverMs: now() });
   }
 
   function handleHello(s: RelaySession, hub: TeamHub, hello: Extract<ClientMessage, { type: 'hello' }>): void {
@@ -192,6 +205,7 @@ export function createRelay(deps: RelayDeps): Relay {
     });
     const stream = streams.get(streamKey(s));
     if (stream && stream.storedUpTo >= 0) s.send({ type: 'stored', streamId: s.streamId ?? s.id, upTo: stream.storedUpTo });
+    if (s.role === 'robot') deps.observer?.robotConnected(streamFor(s).ref);
     publishClients(hub);
   }
 
@@ -228,6 +242,7 @@ export function createRelay(deps: RelayDeps): Relay {
       return fail(s, 'unknown_signal', 'declare signals before sending telemetry');
     }
     const offsetMs = -s.offsetMs;
+    deps.observer?.received(stream.ref, message, s.offsetMs);
     if (message.type === 'telemetry_batch') {
       hub.fanout(STREAM_CHANNELS.telemetry, { ...message, robot: s.identity.principal, offsetMs }, 'lossy');
     } else {
@@ -281,6 +296,7 @@ export function createRelay(deps: RelayDeps): Relay {
       clearTimeout(helloTimer);
       s.markClosed();
       hub.sessions.delete(s);
+      if (s.role === 'robot' && s.hasHello) deps.observer?.robotDisconnected(streamFor(s).ref);
       publishClients(hub);
     });
     ws.on('error', () => {});

@@ -47,12 +47,13 @@ export class TeamHub {
 
   /**
    * Records a robot's acknowledgement and tells the publisher and the channel's subscribers.
-   * Returns false for a revision the relay never issued.
+   * Returns the relay's round trip (ms) from accepting the value to the ack, or undefined for a revision the
+   * relay never issued.
    */
-  ack(robot: RelaySession, channel: string, rev: number): boolean {
+  ack(robot: RelaySession, channel: string, rev: number): number | undefined {
     const entry = this.retained.get(channel);
     const revision = this.revisions.get(channel)?.get(rev);
-    if (!entry || !revision || rev > entry.rev) return false;
+    if (!entry || !revision || rev > entry.rev) return undefined;
     if (rev > (entry.ackedRev ?? 0) && rev === entry.rev) entry.ackedRev = rev;
     const message: ServerMessage = {
       type: 'acked',
@@ -69,7 +70,7 @@ export class TeamHub {
       sent.add(publisher);
     }
     for (const s of this.subscribersOf(channel)) if (!sent.has(s)) s.sendBytes(bytes, 'reliable');
-    return true;
+    return message.relayRttMs;
   }
 
   /** Adds prefixes and delivers what is retained under them at once. */

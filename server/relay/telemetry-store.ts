@@ -1,6 +1,6 @@
 // Where the relay puts robot telemetry and events before confirming them to the robot. The recordings
 // feature provides the PostgreSQL store; this in-memory one keeps each stream for tests and the demo.
-import type { RobotEvent, Signal, TelemetryBatch } from '../../shared/protocol/messages';
+import type { ChannelValue, RobotEvent, Sender, Signal, TelemetryBatch } from '../../shared/protocol/messages';
 
 export interface StreamRef {
   teamId: string;
@@ -16,6 +16,23 @@ export type DurableMessage = TelemetryBatch | RobotEvent;
 export interface TelemetryStore {
   /** Stores the messages (in seq order); duplicates of stored seqs must be ignored. */
   append(stream: StreamRef, messages: DurableMessage[]): Promise<void>;
+}
+
+/**
+ * What the relay tells a recorder as it happens, synchronously and in each socket's frame order, so a match's
+ * start and end fall between the right seqs. Robot time = server time + `robotMinusServerMs`.
+ */
+export interface StreamObserver {
+  robotConnected(stream: StreamRef): void;
+  robotDisconnected(stream: StreamRef): void;
+  /** A telemetry batch or event as it arrives (resends too), before it is stored. */
+  received(stream: StreamRef, message: DurableMessage, robotMinusServerMs: number): void;
+  /** A value the robot published on a robot/ channel. */
+  robotValue(stream: StreamRef, channel: string, value: ChannelValue): void;
+  /** A value a person published on an op/ channel of the team. */
+  selection(teamId: string, selection: { channel: string; value: ChannelValue; rev: number; from: Sender; serverMs: number }): void;
+  /** The robot applied revision `rev` of an op/ channel. */
+  ack(stream: StreamRef, ack: { channel: string; rev: number; relayRttMs: number; serverMs: number }): void;
 }
 
 export interface StoredStream {
