@@ -13,6 +13,7 @@ import { recorderRepo } from './features/recorder/recorder.repo';
 import { createRecorder, type RecorderOptions } from './features/recorder/recorder.service';
 import { recordingsStore } from './features/recordings/recordings.repo';
 import { createRecordingsService } from './features/recordings/recordings.service';
+import { recordingsRouter } from './features/recordings/recordings.routes';
 import type { DevInbox } from './features/mail/fake-smtp';
 import type { Mailer } from './features/mail/mailer';
 import { robotProfileRepo } from './features/season/robot-profile.repo';
@@ -102,6 +103,7 @@ export function createApp(deps: AppDeps): App {
   api.use(authRouter({ auth, tokens, cookies, signInLimit: deps.signInLimit ?? DEFAULT_SIGN_IN_LIMIT }));
   api.use(teamRouter({ team, auth, tokens, cookies }));
   api.use(seasonRouter({ season, team }));
+  api.use(recordingsRouter({ recordings }));
   api.use(() => {
     throw new AppError('not_found', 'No such API route');
   });

@@ -1,5 +1,7 @@
-import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, ilike, lt, lte, or, sql, type SQL } from 'drizzle-orm';
 import type { ChannelValue, Signal } from '../../../shared/protocol/messages';
+import type { MatchType, RecordingListQuery, RecordingMetadata, RecordingSort, RecordingSummary } from '../../../shared/schemas/recording';
+import type { Alliance } from '../../../shared/domain/season/season-profile';
 import type { Db } from '../../db/client';
 import type { Executor } from '../../db/executor';
 import { recordingChunks, recordingEvents, recordings, recordingSignals, recordingStreamSeqs } from '../../db/schema/index';
@@ -9,7 +11,73 @@ export type RecordingRow = typeof recordings.$inferSelect;
 export type NewRecording = Pick<
   typeof recordings.$inferInsert,
   'teamId' | 'robot' | 'robotKeyId' | 'streamId' | 'kind' | 'source' | 'originTMs' | 'startedAt'
->;
+> &
+  Partial<Pick<typeof recordings.$inferInsert, 'status' | 'endedAt' | 'durationMs' | 'notes'>>;
+
+/** The columns a member edits. */
+export type RecordingChanges = Partial<Pick<typeof recordings.$inferInsert, 'kind' | 'robot'>> & Partial<RecordingMetadata>;
+
+/** A row as the API's summary. */
+export function toRecordingSummary(row: RecordingRow): RecordingSummary {
+  return {
+    id: row.id,
+    kind: row.kind,
+    source: row.source,
+    status: row.status,
+    robot: row.robot,
+    startedAt: row.startedAt.toISOString(),
+    endedAt: row.endedAt ? row.endedAt.toISOString() : null,
+    durationS: row.durationMs / 1000,
+    metadata: {
+      event: row.event,
+      matchType: row.matchType as MatchType | null,
+      matchNumber: row.matchNumber,
+      alliance: row.alliance as Alliance | null,
+      station: row.station,
+      operatorName: row.operatorName,
+      tags: row.tags,
+      notes: row.notes,
+    },
+  };
+}
+
+const SORT_COLUMNS = {
+  startedAt: recordings.startedAt,
+  durationS: recordings.durationMs,
+  event: recordings.event,
+  matchNumber: recordings.matchNumber,
+} as const;
+
+function orderFor(sort: RecordingSort): SQL[] {
+  const column = SORT_COLUMNS[sort.replace(/^-/, '') as keyof typeof SORT_COLUMNS];
+  const primary = sort.startsWith('-') ? sql`${column} desc nulls last` : sql`${column} asc nulls last`;
+  return [primary, desc(recordings.startedAt), asc(recordings.id)];
+}
+
+const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+const DAY_MS = 86_400_000;
+
+function listFilter(teamId: string, q: RecordingListQuery): SQL | undefined {
+  const pattern = q.q ? likePattern(q.q) : undefined;
+  return and(
+    eq(recordings.teamId, teamId),
+    q.event ? ilike(recordings.event, likePattern(q.event)) : undefined,
+    q.kind ? eq(recordings.kind, q.kind) : undefined,
+    q.alliance ? eq(recordings.alliance, q.alliance) : undefined,
+    q.tag ? sql`${q.tag} = any(${recordings.tags})` : undefined,
+    q.from ? gte(recordings.startedAt, new Date(`${q.from}T00:00:00Z`)) : undefined,
+    q.to ? lt(recordings.startedAt, new Date(Date.parse(`${q.to}T00:00:00Z`) + DAY_MS)) : undefined,
+    pattern
+      ? or(
+          ilike(recordings.robot, pattern),
+          ilike(recordings.event, pattern),
+          ilike(recordings.operatorName, pattern),
+          ilike(recordings.notes, pattern),
+          sql`array_to_string(${recordings.tags}, ' ') ilike ${pattern}`,
+        )
+      : undefined,
+  );
+}
 
 export interface StoredEvent {
   seq: number;
@@ -47,6 +115,47 @@ export function recordingsRepo(db: Executor) {
     async insertRecording(input: NewRecording): Promise<RecordingRow> {
       const [row] = await db.insert(recordings).values(input).onConflictDoNothing().returning();
       return row ?? (await this.findByStream(input.teamId, input.streamId))!;
+    },
+
+    /** One page of a team's recordings (dates in UTC days) and how many match in all. */
+    async listPage(teamId: string, q: RecordingListQuery): Promise<{ rows: RecordingRow[]; total: number }> {
+      const where = listFilter(teamId, q);
+      const [count] = await db.select({ n: sql<number>`count(*)::int` }).from(recordings).where(where);
+      const rows = await db
+        .select()
+        .from(recordings)
+        .where(where)
+        .orderBy(...orderFor(q.sort))
+        .limit(q.pageSize)
+        .offset((q.page - 1) * q.pageSize);
+      return { rows, total: count!.n };
+    },
+
+    async update(teamId: string, id: string, changes: RecordingChanges): Promise<RecordingRow | undefined> {
+      if (Object.keys(changes).length === 0) return this.find(teamId, id);
+      const [row] = await db
+        .update(recordings)
+        .set(changes)
+        .where(and(eq(recordings.teamId, teamId), eq(recordings.id, id)))
+        .returning();
+      return row;
+    },
+
+    /** Removes the recording and everything stored under it; run inside a transaction. */
+    async deleteRecording(recordingId: string): Promise<void> {
+      await db.delete(recordingChunks).where(eq(recordingChunks.recordingId, recordingId));
+      await db.delete(recordingEvents).where(eq(recordingEvents.recordingId, recordingId));
+      await db.delete(recordingStreamSeqs).where(eq(recordingStreamSeqs.recordingId, recordingId));
+      await db.delete(recordingSignals).where(eq(recordingSignals.recordingId, recordingId));
+      await db.delete(recordings).where(eq(recordings.id, recordingId));
+    },
+
+    async countEvents(recordingId: string): Promise<number> {
+      const [row] = await db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(recordingEvents)
+        .where(eq(recordingEvents.recordingId, recordingId));
+      return row!.n;
     },
 
     async countSignals(recordingId: string): Promise<number> {

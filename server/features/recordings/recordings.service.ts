@@ -1,8 +1,21 @@
+import { randomUUID } from 'node:crypto';
 import type { RobotEvent, Signal, TelemetryBatch } from '../../../shared/protocol/messages';
+import type { RecordingHeader } from '../../../shared/protocol/recording-file';
+import type {
+  RecordingDetail,
+  RecordingEvent,
+  RecordingListQuery,
+  RecordingPage,
+  RecordingPatch,
+  SamplesAnswer,
+  SamplesQuery,
+} from '../../../shared/schemas/recording';
+import type { Actor } from '../auth/actor';
 import { decodeTelemetry } from '../../../shared/protocol/telemetry-codec';
 import { AppError, notFound } from '../../lib/errors';
 import { CHUNK_TICKS, groupForMerge, mergeChunks, planRuns, runChunks, sliceSamples, tickTimeMs, type DecodedBatch, type Samples } from './chunks';
-import type { RecordingRow, RecordingsStore, SignalChunk, StoredEvent } from './recordings.repo';
+import { csvLines, CSV_HEADER_LINE, planUpload, recordingFilePieces, recordingRecords, storedColumn, UploadFileError, type FileFormat } from './recording-files';
+import { toRecordingSummary, type RecordingRow, type RecordingsStore, type SignalChunk, type StoredEvent } from './recordings.repo';
 
 export type RecordingKind = RecordingRow['kind'];
 export type RecordingSource = RecordingRow['source'];
@@ -34,6 +47,17 @@ export interface RecordingsServiceDeps {
 
 export class IngestError extends Error {}
 
+/** A file download: its name, type and bytes in pieces. */
+export interface RecordingDownload {
+  fileName: string;
+  contentType: string;
+  body: AsyncIterable<Uint8Array | string>;
+}
+
+const finiteOrNull = (v: number) => (Number.isFinite(v) ? v : null);
+const fileStem = (row: RecordingRow) =>
+  `${row.robot.replace(/[^A-Za-z0-9_-]+/g, '-') || 'recording'}-${row.startedAt.toISOString().slice(0, 10)}-${row.id.slice(0, 8)}`;
+
 export function createRecordingsService({ store, now }: RecordingsServiceDeps) {
   async function recordingOrThrow(teamId: string, id: string): Promise<RecordingRow> {
     const row = await store.find(teamId, id);
@@ -44,6 +68,115 @@ export function createRecordingsService({ store, now }: RecordingsServiceDeps) {
   return {
     findByStream: (teamId: string, streamId: string) => store.findByStream(teamId, streamId),
     get: recordingOrThrow,
+
+    async list(actor: Actor, query: RecordingListQuery): Promise<RecordingPage> {
+      const { rows, total } = await store.listPage(actor.team.id, query);
+      return { items: rows.map(toRecordingSummary), total, page: query.page, pageSize: query.pageSize };
+    },
+
+    async describe(actor: Actor, id: string): Promise<RecordingDetail> {
+      const row = await recordingOrThrow(actor.team.id, id);
+      const [signalCount, eventCount] = await Promise.all([store.countSignals(id), store.countEvents(id)]);
+      return { ...toRecordingSummary(row), signalCount, eventCount };
+    },
+
+    async update(actor: Actor, id: string, patch: RecordingPatch): Promise<RecordingDetail> {
+      const row = await store.update(actor.team.id, id, { kind: patch.kind, robot: patch.robot, ...patch.metadata });
+      if (!row) throw notFound('That recording');
+      return this.describe(actor, id);
+    },
+
+    /** Deletes the recording with its signals, samples, events and stored seqs, in one transaction. */
+    async remove(actor: Actor, id: string): Promise<void> {
+      await store.transaction(async (repo) => {
+        if (!(await repo.find(actor.team.id, id))) throw notFound('That recording');
+        await repo.deleteRecording(id);
+      });
+    },
+
+    async samples(actor: Actor, id: string, query: SamplesQuery): Promise<SamplesAnswer> {
+      const { tS, values } = await this.readSamples(actor.team.id, id, query.signal, { fromS: query.from, toS: query.to });
+      return { signal: query.signal, tS: Array.from(tS), values: Array.from(values, finiteOrNull) };
+    },
+
+    async events(actor: Actor, id: string): Promise<RecordingEvent[]> {
+      const row = await recordingOrThrow(actor.team.id, id);
+      const events = await store.listEvents(id);
+      return events.map((e) => ({ seq: e.seq, tS: (e.tMs - row.originTMs) / 1000, kind: e.kind, data: e.data }));
+    },
+
+    /**
+     * Stores an uploaded file (Pitwall recording or long-form CSV, told apart by content) as a finished
+     * recording: validated whole first, then written in one transaction, so a bad file stores nothing.
+     */
+    async upload(actor: Actor, bytes: Uint8Array, kind: RecordingKind): Promise<{ id: string }> {
+      let plan: ReturnType<typeof planUpload>;
+      try {
+        plan = planUpload(bytes);
+      } catch (error) {
+        if (error instanceof UploadFileError) throw new AppError('bad_request', error.message, [{ path: 'file', message: error.message }]);
+        throw error;
+      }
+      const startedAt = plan.startedAtMs === undefined ? now() : new Date(plan.startedAtMs + plan.originTMs);
+      return store.transaction(async (repo) => {
+        const recording = await repo.insertRecording({
+          teamId: actor.team.id,
+          robot: plan.robot ?? 'Unnamed robot',
+          robotKeyId: null,
+          streamId: `upload/${randomUUID()}`,
+          kind,
+          source: 'upload',
+          status: 'finished',
+          originTMs: plan.originTMs,
+          startedAt,
+          endedAt: new Date(startedAt.getTime() + plan.durationMs),
+          durationMs: plan.durationMs,
+          notes: plan.notes ?? '',
+        });
+        await repo.insertSignals(recording.id, plan.signals);
+        await repo.insertChunks(recording.id, plan.chunks);
+        await repo.insertEvents(recording.id, plan.events);
+        return { id: recording.id };
+      });
+    },
+
+    /** The recording as a Pitwall recording file or as long-form CSV (time_s,signal,value), produced piece by piece. */
+    async exportFile(actor: Actor, id: string, format: FileFormat): Promise<RecordingDownload> {
+      const row = await recordingOrThrow(actor.team.id, id);
+      const signals = await store.listSignals(id);
+      if (format === 'csv') {
+        return {
+          fileName: `${fileStem(row)}.csv`,
+          contentType: 'text/csv; charset=utf-8',
+          body: (async function* () {
+            yield CSV_HEADER_LINE;
+            for (const signal of signals) {
+              const { tS, values } = sliceSamples(await store.readChunks(id, signal.index), row.originTMs);
+              yield csvLines(signal.name, tS, values);
+            }
+          })(),
+        };
+      }
+      const columns = [];
+      for (const signal of signals) columns.push(storedColumn(await store.readChunks(id, signal.index)));
+      const header: RecordingHeader = {
+        format: 'pitwall-recording',
+        version: 1,
+        source: row.source,
+        robot: row.robot.slice(0, 64),
+        teamNumber: actor.team.number,
+        startedAtMs: row.startedAt.getTime() - row.originTMs,
+        ...(row.notes ? { notes: row.notes.slice(0, 2000) } : {}),
+      };
+      const records = recordingRecords(signals, columns, await store.listEvents(id));
+      return {
+        fileName: `${fileStem(row)}.pwrec`,
+        contentType: 'application/vnd.pitwall.recording',
+        body: (async function* () {
+          yield* recordingFilePieces(header, records);
+        })(),
+      };
+    },
 
     /**
      * Stores relay messages of one stream in one transaction: all of them or none. Seqs stored before are
