@@ -48,7 +48,7 @@ export interface AppDeps {
    */
   telemetryStore?: TelemetryStore;
   /** Recorder timing (tests shorten the disconnect grace). */
-  recorder?: Partial<Pick<RecorderOptions, 'graceMs' | 'tailMs' | 'autoGapMs' | 'preRollMs'>>;
+  recorder?: Partial<Pick<RecorderOptions, 'graceMs' | 'tailMs' | 'autoGapMs' | 'preRollMs' | 'keepLiveSimulated'>>;
   /** Relay timing and limits (tests shorten them). */
   relay?: Partial<Pick<RelayDeps, 'heartbeatMs' | 'staleMs' | 'viewerStaleMs' | 'maxFrameBytes' | 'limits' | 'helloTimeoutMs'>>;
 }

@@ -8,6 +8,7 @@ import { createApp } from './app';
 import { connectDb, type DbHandle } from './db/client';
 import { startEmbeddedPostgres, withDatabase, type EmbeddedPostgres } from './db/embedded-postgres';
 import { runMigrations } from './db/migrate';
+import { seedDemoRecordings } from './features/demo/demo-recordings';
 import { seedDemo } from './features/demo/seed';
 import { ensureSimulatorKey } from './features/demo/simulator-key';
 import { RELAY_PATH } from './relay/relay-server';
@@ -92,6 +93,10 @@ export async function startServer({ env, logger, databaseUrl, seed }: StartOptio
   if (seed) {
     const { created } = await seedDemo(handle.db);
     logger.info(created ? `demo data: added ${created} rows` : 'demo data: already there');
+    // About 5 s on the first start (12 headless matches); later starts only check they are there.
+    const t0 = performance.now();
+    const matches = await seedDemoRecordings(handle.db);
+    if (matches.created) logger.info(`demo data: added ${matches.created} simulated matches in ${Math.round(performance.now() - t0)} ms`);
   }
   const mail = await provideMail(env);
   const server = http.createServer();

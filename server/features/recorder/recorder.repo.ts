@@ -1,4 +1,4 @@
-import { eq, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { ChannelValue } from '../../../shared/protocol/messages';
 import type { Executor } from '../../db/executor';
 import { recordingEvents, recordings } from '../../db/schema/index';
@@ -33,6 +33,19 @@ export function recorderRepo(db: Executor) {
                e.t_ms, e.kind, e.data
         from unnest(${sql.param(events.map((e) => e.tMs))}::float8[], ${sql.param(events.map((e) => e.kind))}::text[],
                     ${sql.param(events.map((e) => JSON.stringify(e.data)))}::jsonb[]) with ordinality as e(t_ms, kind, data, n)`);
+    },
+
+    /** Deletes the team's finished live simulated recordings beyond the newest `keep`; returns how many. */
+    async trimLiveSimulated(teamId: string, keep: number): Promise<number> {
+      const rows = await db
+        .select({ id: recordings.id })
+        .from(recordings)
+        .where(and(eq(recordings.teamId, teamId), eq(recordings.kind, 'simulated'), eq(recordings.source, 'live'), eq(recordings.status, 'finished')))
+        .orderBy(desc(recordings.startedAt))
+        .offset(keep);
+      if (rows.length === 0) return 0;
+      await db.delete(recordings).where(inArray(recordings.id, rows.map((r) => r.id)));
+      return rows.length;
     },
 
     async updateMatchDetails(recordingId: string, details: MatchDetails): Promise<void> {

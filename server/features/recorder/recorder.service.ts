@@ -27,6 +27,8 @@ export interface RecorderOptions {
   /** Between-match telemetry kept in memory and put at the front of the next recording (robot time). */
   preRollMs?: number;
   compactEveryTicks?: number;
+  /** Live simulated recordings kept per team (the demo simulator plays a match every few minutes); older ones go. */
+  keepLiveSimulated?: number;
 }
 
 interface Segment {
@@ -69,6 +71,7 @@ export function createRecorder(options: RecorderOptions) {
   const tailMs = options.tailMs ?? 500;
   const autoGapMs = options.autoGapMs ?? 5_000;
   const preRollMs = options.preRollMs ?? 1_000;
+  const keepLiveSimulated = options.keepLiveSimulated ?? 30;
   const streams = new Map<string, StreamState>();
   const segmentsByKey = new Map<string, { stream: StreamState; segment: Segment }>();
   const pg = new PgTelemetryStore(recordings, {
@@ -181,6 +184,10 @@ export function createRecorder(options: RecorderOptions) {
     if (segment.recordingId) {
       const row = await recordings.finish(state.ref.teamId, segment.recordingId);
       logger.info({ robot: state.ref.robot, recordingId: row.id, durationMs: row.durationMs }, 'recorder: recording finished');
+      if (segment.kind === 'simulated') {
+        const removed = await repo.trimLiveSimulated(state.ref.teamId, keepLiveSimulated);
+        if (removed > 0) logger.info({ removed, kept: keepLiveSimulated }, 'recorder: removed the oldest live simulated recordings');
+      }
     }
     segmentsByKey.delete(`${state.ref.teamId}/${segment.key}`);
     // Keep the finished range only as long as a resend could still fall into it.
