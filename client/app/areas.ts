@@ -55,6 +55,7 @@ export const AREAS: readonly Area[] = [
     path: '/recordings',
     label: 'Recordings',
     icon: 'recordings',
+    isAvailable: true,
     tagline: 'Every match and practice run, ready to replay',
     description:
       'Telemetry, operator selections and robot events from each match are stored as a recording. Replay one on a single timeline with traces, the field map, the event strip and values at the cursor, and leave timestamped notes for the pit.',

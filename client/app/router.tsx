@@ -26,6 +26,7 @@ const router = createBrowserRouter([
           { path: 'panels', lazy: () => import('./routes/panels') },
           { path: 'live', lazy: () => import('./routes/live') },
           { path: 'recordings', lazy: () => import('./routes/recordings') },
+          { path: 'recordings/:id', lazy: () => import('./routes/recordings').then((m) => ({ Component: m.ReplayComponent })) },
           { path: 'cycles', lazy: () => import('./routes/cycles') },
           { path: 'drills', lazy: () => import('./routes/drills') },
           { path: 'season', lazy: () => import('./routes/season') },
