@@ -50,6 +50,15 @@ export function BulkActions({ role, selected, onClear }: BulkActionsProps) {
     if (result.failed.length === 0) onClear();
   }
 
+  if (count === 0 && job === null) {
+    return (
+      <p className="mb-3 text-sm text-asphalt-400">
+        Tick recordings to {canManage ? 'change their kind, tag them, ' : ''}export one{canDelete ? ' or delete them' : ''}.
+        {!canManage && ' Programmers and leads change recordings.'}
+      </p>
+    );
+  }
+
   return (
     <div role="region" aria-label="Selected recordings" className="mb-3 rounded-tile bg-asphalt-800 p-3 ring-1 ring-asphalt-600">
       <div className="flex flex-wrap items-end gap-x-4 gap-y-3">
@@ -84,6 +93,7 @@ export function BulkActions({ role, selected, onClear }: BulkActionsProps) {
           />
           <Button
             size="sm"
+            className="whitespace-nowrap"
             disabled={trimmedTag === ''}
             onClick={() =>
               run(`Adding tag “${trimmedTag}”`, (r) =>

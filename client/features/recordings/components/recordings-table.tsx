@@ -92,10 +92,10 @@ function RecordingRow({ recording: r, isSelected, isHighlighted, onToggle }: Rec
             onChange={onToggle}
           />
       </td>
-      <th scope="row" className="px-3 py-2.5 font-normal whitespace-nowrap">
+      <th scope="row" className="px-2.5 py-2.5 font-normal whitespace-nowrap">
         <Link
           to={`/recordings/${r.id}`}
-          className="num font-semibold text-asphalt-100 underline decoration-asphalt-600 underline-offset-4 hover:text-signal-300 hover:decoration-signal-400"
+          className="font-semibold text-asphalt-100 underline decoration-asphalt-600 underline-offset-4 hover:text-signal-300 hover:decoration-signal-400"
         >
           {started}
         </Link>
@@ -105,10 +105,10 @@ function RecordingRow({ recording: r, isSelected, isHighlighted, onToggle }: Rec
           </Badge>
         )}
       </th>
-      <td className="max-w-52 truncate px-3 py-2.5 text-asphalt-200" title={r.metadata.event ?? undefined}>
+      <td className="max-w-44 truncate px-2.5 py-2.5 text-asphalt-200" title={r.metadata.event ?? undefined}>
         {r.metadata.event ?? <span className="text-asphalt-500">—</span>}
       </td>
-      <td className="px-3 py-2.5 whitespace-nowrap">
+      <td className="px-2.5 py-2.5 whitespace-nowrap">
         {match ? (
           <abbr title={match.long} className="num no-underline">
             {match.short}
@@ -117,18 +117,18 @@ function RecordingRow({ recording: r, isSelected, isHighlighted, onToggle }: Rec
           <span className="text-asphalt-500">—</span>
         )}
       </td>
-      <td className="px-3 py-2.5">
+      <td className="px-2.5 py-2.5">
         <Badge tone={KIND_TONES[r.kind]}>{KIND_LABELS[r.kind]}</Badge>
       </td>
-      <td className="px-3 py-2.5">
+      <td className="px-2.5 py-2.5">
         <AllianceChip metadata={r.metadata} />
       </td>
-      <td className="px-3 py-2.5 whitespace-nowrap text-asphalt-200">{r.robot}</td>
-      <td className="px-3 py-2.5 whitespace-nowrap text-asphalt-300">
+      <td className="px-2.5 py-2.5 whitespace-nowrap text-asphalt-200">{r.robot}</td>
+      <td className="px-2.5 py-2.5 whitespace-nowrap text-asphalt-300">
         {r.metadata.operatorName ?? <span className="text-asphalt-500">—</span>}
       </td>
-      <td className="num px-3 py-2.5 text-right whitespace-nowrap text-asphalt-200">{formatDuration(r.durationS)}</td>
-      <td className="px-3 py-2.5">
+      <td className="num px-2.5 py-2.5 text-right whitespace-nowrap text-asphalt-200">{formatDuration(r.durationS)}</td>
+      <td className="px-2.5 py-2.5">
         {r.metadata.tags.length > 0 ? (
           <ul className="flex max-w-56 flex-wrap gap-1">
             {r.metadata.tags.map((t) => (
@@ -141,7 +141,7 @@ function RecordingRow({ recording: r, isSelected, isHighlighted, onToggle }: Rec
           <span className="text-asphalt-500">—</span>
         )}
       </td>
-      <td className="px-3 py-2.5 whitespace-nowrap">
+      <td className="px-2.5 py-2.5 whitespace-nowrap">
         {r.status === 'recording' ? (
           <span className="inline-flex items-center gap-1.5 text-sm font-semibold text-stop">
             <span aria-hidden="true" className="size-2 animate-pulse rounded-full bg-stop" />

@@ -8,7 +8,7 @@ type SortHeaderProps = { label: string; field: SortField; sort: RecordingSort; o
 export function SortHeader({ label, field, sort, onSort, isEnd = false }: SortHeaderProps) {
   const state = sortState(sort, field);
   return (
-    <th scope="col" aria-sort={state} className={cx('px-3 py-1 font-semibold whitespace-nowrap', isEnd && 'text-right')}>
+    <th scope="col" aria-sort={state} className={cx('px-2.5 py-1 font-semibold whitespace-nowrap', isEnd && 'text-right')}>
       <button
         type="button"
         onClick={() => onSort(field)}
@@ -30,7 +30,7 @@ export function SortHeader({ label, field, sort, onSort, isEnd = false }: SortHe
 /** A header of a column the server can't sort by. */
 export function PlainHeader({ label, isEnd = false }: { label: string; isEnd?: boolean }) {
   return (
-    <th scope="col" className={cx('px-3 py-2.5 font-semibold tracking-[0.12em] whitespace-nowrap uppercase', isEnd && 'text-right')}>
+    <th scope="col" className={cx('px-2.5 py-2.5 font-semibold tracking-[0.12em] whitespace-nowrap uppercase', isEnd && 'text-right')}>
       {label}
     </th>
   );
