@@ -64,13 +64,9 @@ export function sniffFormat(bytes: Uint8Array): FileFormat {
   const header = normaliseHeader(firstLine(bytes));
   if ((CSV_HEADERS as readonly string[]).includes(header)) return 'csv';
   const hex = Array.from(bytes.subarray(0, 4), (b) => b.toString(16).padStart(2, '0')).join(' ');
-  const what = isPng
-    ? 'a PNG image'
-    : header.includes(',')
-      ? `a CSV whose header is not time_s,signal,value (line 1)`
-      : `bytes ${hex}`;
+  const what = isPng ? 'a PNG image (at byte 0)' : header.includes(',') ? 'a CSV line that is not that header (line 1)' : `bytes ${hex} (at byte 0)`;
   throw new UploadFileError(
-    `Not a Pitwall recording (a MessagePack map with format "pitwall-recording") nor a CSV with the header time_s,signal,value: the file starts with ${what} (at byte 0)`,
+    `Not a Pitwall recording (a MessagePack map with format "pitwall-recording") nor a CSV with the header time_s,signal,value: the file starts with ${what}`,
   );
 }
 
