@@ -1,3 +1,4 @@
 export * from './auth';
 export * from './robot';
 export * from './recordings';
+export * from './notes';
