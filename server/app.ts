@@ -14,6 +14,7 @@ import { createRecorder, type RecorderOptions } from './features/recorder/record
 import { recordingsStore } from './features/recordings/recordings.repo';
 import { createRecordingsService } from './features/recordings/recordings.service';
 import { recordingsRouter } from './features/recordings/recordings.routes';
+import { notesRouter } from './features/notes/notes.routes';
 import type { DevInbox } from './features/mail/fake-smtp';
 import type { Mailer } from './features/mail/mailer';
 import { robotProfileRepo } from './features/season/robot-profile.repo';
@@ -104,6 +105,7 @@ export function createApp(deps: AppDeps): App {
   api.use(teamRouter({ team, auth, tokens, cookies }));
   api.use(seasonRouter({ season, team }));
   api.use(recordingsRouter({ recordings }));
+  api.use(notesRouter({ db: deps.db }));
   api.use(() => {
     throw new AppError('not_found', 'No such API route');
   });
