@@ -13,10 +13,10 @@ import { useMe } from '../../features/auth/api/me';
 import { useInvalidateRecordings, useRecording, useRecordings } from '../../features/recordings/api/recordings';
 import { BulkActions } from '../../features/recordings/components/bulk-actions';
 import { Pager } from '../../features/recordings/components/pager';
-import { RecordingFacts } from '../../features/recordings/components/recording-facts';
 import { RecordingFilters } from '../../features/recordings/components/recording-filters';
 import { RecordingsTable } from '../../features/recordings/components/recordings-table';
 import { UploadPanel } from '../../features/recordings/components/upload-panel';
+import { ReplayPage } from '../../features/replay/components/replay-page';
 import { matchLabel } from '../../features/recordings/model/format';
 import {
   activeFilterCount,
@@ -124,28 +124,25 @@ export function Component() {
   );
 }
 
-/** /recordings/:id: the replay isn't built yet; say so, and show what is known about the recording. */
+/** /recordings/:id: the replay of one recording; `?t=93.2` opens it at that moment. */
 export function ReplayComponent() {
   const { id = '' } = useParams();
+  const [params] = useSearchParams();
+  // Read once: afterwards the page writes the moment into the address itself.
+  const [initialMoment] = useState(() => params.get('t'));
+  const { data: me } = useMe();
   const recording = useRecording(id);
+  if (!me) return null;
   return (
     <QueryGate query={recording} loadingLabel="Loading the recording…" errorTitle="Couldn’t load this recording">
       {(r) => (
         <>
           <PageHeader
-            eyebrow={<>Recording</>}
+            eyebrow={<>Replay · {r.robot}</>}
             title={[r.metadata.event, matchLabel(r.metadata)?.long].filter(Boolean).join(' · ') || `${r.robot} recording`}
             actions={<ButtonLink to="/recordings">Back to recordings</ButtonLink>}
           />
-          <div className="flex flex-col gap-5">
-            <Notice tone="info" title="Replay is coming">
-              The timeline with traces, the field map, the event strip and values at the cursor will open here in a later release.
-              For now you can export the recording from the list.
-            </Notice>
-            <Section title="About this recording">
-              <RecordingFacts recording={r} />
-            </Section>
-          </div>
+          <ReplayPage key={r.id} recording={r} me={{ name: me.user.name, role: me.role }} initialMoment={initialMoment} />
         </>
       )}
     </QueryGate>
