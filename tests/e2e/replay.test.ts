@@ -63,7 +63,7 @@ describe('replay through the UI', () => {
     await page.getByRole('button', { name: 'Play' }).click();
     await expect.poll(() => cursorSeconds(page), { timeout: 10_000 }).toBeGreaterThan(before + 1.5);
     await expect.poll(() => robotAt(page), { timeout: 10_000 }).not.toBe(robotBefore);
-    await page.screenshot({ path: path.join(SHOTS, 'replay-playing.png'), fullPage: true });
+    await page.screenshot({ path: path.join(SHOTS, 'replay-playing.png'), fullPage: false });
     await page.getByRole('button', { name: 'Pause' }).click();
 
     const paused = await cursorSeconds(page);
@@ -79,14 +79,15 @@ describe('replay through the UI', () => {
     const note = page.getByRole('list', { name: 'Notes' }).getByText('Slow to line up on the reef here');
     await note.waitFor();
     await page.getByRole('button', { name: new RegExp(`^Note at ${atEvent.toFixed(2)} s`) }).waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'replay-note.png'), fullPage: true });
+    await page.getByRole('list', { name: 'Notes' }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, 'replay-note.png'), fullPage: false });
 
     const url = new URL(page.url());
     url.searchParams.set('t', '93.2');
     await page.goto(url.toString());
     await expect.poll(() => page.getByTestId('cursor-time').textContent()).toBe('93.20 s');
     await page.locator('[data-trace-pane] canvas').first().waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'replay-moment.png'), fullPage: true });
+    await page.screenshot({ path: path.join(SHOTS, 'replay-moment.png'), fullPage: false });
 
     // The coach deletes their own note.
     await page.getByRole('button', { name: /^Delete note/ }).click();

@@ -39,19 +39,20 @@ export function TimelineBar({ marks, notes, onStep, onJump, onCopyLink }: Timeli
       <div className="flex flex-wrap items-center gap-x-5 gap-y-3">
         <div className="flex items-center gap-1.5" role="group" aria-label="Playback">
           <Button variant="ghost" size="sm" onClick={() => onJump(-1)} aria-label="Previous event" title="Previous event ( [ )">
-            ⏮
+            <Glyph d="M6 5v14M18 5 9 12l9 7z" />
           </Button>
           <Button variant="ghost" size="sm" onClick={() => onStep(-1)} aria-label="Back one tick" title="Back one tick (←)">
             −1
           </Button>
           <Button variant="primary" onClick={() => store.toggle()} aria-label={isPlaying ? 'Pause' : 'Play'} className="w-28">
-            {isPlaying ? '❚❚ Pause' : '▶ Play'}
+            {isPlaying ? <Glyph d="M7 5h3v14H7zM14 5h3v14h-3z" isFilled /> : <Glyph d="M7 5l12 7-12 7z" isFilled />}
+            {isPlaying ? 'Pause' : 'Play'}
           </Button>
           <Button variant="ghost" size="sm" onClick={() => onStep(1)} aria-label="Forward one tick" title="Forward one tick (→)">
             +1
           </Button>
           <Button variant="ghost" size="sm" onClick={() => onJump(1)} aria-label="Next event" title="Next event ( ] )">
-            ⏭
+            <Glyph d="M18 5v14M6 5l9 7-9 7z" />
           </Button>
         </div>
         <CursorReadout durationS={store.durationS} />
@@ -218,5 +219,13 @@ function ScrubBar({ marks, notes }: { marks: readonly EventMark[]; notes: readon
       </div>
       <p ref={lastRef} className="mt-1.5 truncate text-sm text-asphalt-300" aria-live="off" data-testid="last-event" />
     </div>
+  );
+}
+
+function Glyph({ d, isFilled = false }: { d: string; isFilled?: boolean }) {
+  return (
+    <svg viewBox="0 0 24 24" aria-hidden="true" className="size-4" fill={isFilled ? 'currentColor' : 'none'} stroke="currentColor" strokeWidth={2} strokeLinejoin="round" strokeLinecap="round">
+      <path d={d} />
+    </svg>
   );
 }

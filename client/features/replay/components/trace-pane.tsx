@@ -41,6 +41,7 @@ export function TracePane({ recordingId, index, signals, allSignals, colourOffse
   useEffect(() => {
     const host = hostRef.current;
     if (!host) return;
+    let afterDraw = () => {};
     const units = [...new Set(signals.map((s) => s.unit || s.name))];
     const opts: uPlot.Options = {
       width: Math.max(host.clientWidth, 200),
@@ -79,6 +80,8 @@ export function TracePane({ recordingId, index, signals, allSignals, colourOffse
         })),
       ],
       hooks: {
+        // uPlot commits a new scale on a microtask, so the cursor line is placed after each draw.
+        draw: [() => afterDraw()],
         setSelect: [
           (u) => {
             if (u.select.width < 4) return;
@@ -105,12 +108,13 @@ export function TracePane({ recordingId, index, signals, allSignals, colourOffse
       chart.setScale('x', { min: window.fromS, max: window.toS });
       placeLine();
     };
-    const placeLine = () => {
+    function placeLine() {
       const { tS, window } = store.get();
       const isInside = tS >= window.fromS && tS <= window.toS;
       line.style.display = isInside ? '' : 'none';
       if (isInside) line.style.transform = `translateX(${chart.valToPos(tS, 'x')}px)`;
-    };
+    }
+    afterDraw = placeLine;
     drawRef.current = draw;
     draw();
 

@@ -32,7 +32,7 @@ export function eventMarks(events: readonly RecordingEvent[]): EventMark[] {
         at('call', `Operator chose ${text(d.value)} on ${text(d.channel).replace(/^op\//, '')}`);
         break;
       case 'target_changed':
-        at('call', `Target now ${[d.branch, d.level, d.station, d.algae, d.cage].filter((v) => v !== null && v !== undefined).join(' ') || 'none'}`);
+        at('call', `Target now ${[d.branch, d.level, d.station, d.algae, d.cage].filter((v) => v !== null && v !== undefined && v !== 'none').join(' ') || 'none'}`);
         break;
       case 'mode_changed':
         at('mode', `Mode ${text(d.from)} → ${text(d.to)}`);
