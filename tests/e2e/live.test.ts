@@ -1,21 +1,17 @@
 // Through the real UI in headless Chromium: a coach opens Live with no robot connected and cannot send;
 // then a stand-in robot connects over the relay, and an operator sees it, taps branch C and sees the
 // robot's acknowledgement with the round trip, while the robot really received op/reef/branch = C.
-import { existsSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
-import { seedDemo } from '../../server/features/demo/seed';
-import { CLIENT_DIST, PROJECT_ROOT } from '../../server/runtime';
+import { DEMO_PASSWORD } from '../../server/features/demo/demo-team';
 import type { ChannelValue, Signal } from '../../shared/protocol/messages';
 import type { Role } from '../../shared/domain/roles';
 import { RobotClient } from '../../simulator/src/robot-client';
-import { launchBrowser } from '../support/browser';
+import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
 import { relayUrl } from '../support/relay-clients';
-import { startTestServer, type TestServer } from '../support/test-server';
+import type { TestServer } from '../support/test-server';
 
-const SHOTS = path.join(PROJECT_ROOT, '.data', 'screenshots');
 const SIGNALS: Signal[] = [
   { index: 0, name: 'drive/pose/x', type: 'number', unit: 'm' },
   { index: 1, name: 'drive/pose/y', type: 'number', unit: 'm' },
@@ -27,45 +23,31 @@ const SIGNALS: Signal[] = [
 ];
 const TICK_MS = 20;
 
+let stack: BrowserStack;
 let server: TestServer;
-let browser: Browser;
 let robotKey: string;
 let robot: RobotClient | undefined;
 let telemetryTimer: NodeJS.Timeout | undefined;
 const received: { channel: string; value: ChannelValue; retained: boolean }[] = [];
 
 beforeAll(async () => {
-  if (!existsSync(path.join(CLIENT_DIST, 'index.html'))) throw new Error('build the client first (npm test does)');
-  mkdirSync(SHOTS, { recursive: true });
-  server = await startTestServer({ clientDir: CLIENT_DIST });
-  await seedDemo(server.db.db);
+  stack = await startBrowserStack();
+  server = stack.server;
   const lead = await server.client();
   await lead.post('/api/auth/sign-in').send({ email: 'lead@harborlight.example', password: DEMO_PASSWORD }).expect(200);
   robotKey = (await lead.post('/api/team/robot-keys').send({ name: 'Gullwing' }).expect(201)).body.secret;
-  browser = await launchBrowser();
 });
 afterAll(async () => {
   clearInterval(telemetryTimer);
   robot?.stop();
-  await browser?.close();
-  await server?.close();
+  await stack?.close();
 });
 
 async function until(test: () => boolean, timeoutMs = 5000): Promise<void> {
   await expect.poll(test, { timeout: timeoutMs, interval: 20 }).toBe(true);
 }
 
-async function signIn(role: Role): Promise<Page> {
-  const member = DEMO_MEMBERS.find((m) => m.role === role)!;
-  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
-  const page = await context.newPage();
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(member.email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect.poll(() => page.url()).not.toContain('/sign-in');
-  return page;
-}
+const signIn = (role: Role): Promise<Page> => signInAs(stack, role);
 
 /** A stand-in robot: drives a slow loop in front of the blue reef, acks every new op/ value. */
 async function startRobot(): Promise<RobotClient> {

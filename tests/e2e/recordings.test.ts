@@ -2,32 +2,26 @@
 // progress and then the new row, filters by kind, and uploads random bytes to read the server's reason;
 // a viewer finds no upload control.
 import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
 import { seedDemoRecordings } from '../../server/features/demo/demo-recordings';
-import { seedDemo } from '../../server/features/demo/seed';
-import { CLIENT_DIST, PROJECT_ROOT } from '../../server/runtime';
 import type { Role } from '../../shared/domain/roles';
 import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
 import { season2025 } from '../../shared/domain/season/season-2025';
 import { runHeadlessMatch } from '../../simulator/src/headless';
 import { encodeHeadlessMatch } from '../../simulator/src/match-file';
-import { launchBrowser } from '../support/browser';
-import { startTestServer, type TestServer } from '../support/test-server';
+import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
+import type { TestServer } from '../support/test-server';
 
-const SHOTS = path.join(PROJECT_ROOT, '.data', 'screenshots');
+let stack: BrowserStack;
 let server: TestServer;
-let browser: Browser;
 let matchFile: string;
 let corruptFile: string;
 
 beforeAll(async () => {
-  if (!existsSync(path.join(CLIENT_DIST, 'index.html'))) throw new Error('build the client first (npm test does)');
-  mkdirSync(SHOTS, { recursive: true });
   const dir = mkdtempSync(path.join(tmpdir(), 'pitwall-recordings-'));
   matchFile = path.join(dir, 'gullwing-seed-3.pitwall');
   writeFileSync(
@@ -40,27 +34,14 @@ beforeAll(async () => {
   );
   corruptFile = path.join(dir, 'scrambled.bin');
   writeFileSync(corruptFile, randomBytes(4096));
-  server = await startTestServer({ clientDir: CLIENT_DIST });
-  await seedDemo(server.db.db);
-  await seedDemoRecordings(server.db.db);
-  browser = await launchBrowser();
+  stack = await startBrowserStack((s) => seedDemoRecordings(s.db.db).then(() => undefined));
+  server = stack.server;
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await stack?.close();
 });
 
-async function signIn(role: Role): Promise<Page> {
-  const member = DEMO_MEMBERS.find((m) => m.role === role)!;
-  const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
-  const page = await context.newPage();
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(member.email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect.poll(() => page.url()).not.toContain('/sign-in');
-  return page;
-}
+const signIn = (role: Role): Promise<Page> => signInAs(stack, role, { width: 1440, height: 900 });
 
 describe('recordings through the UI', () => {
   it('lets a programmer upload a match file, see its progress and row, filter by kind, and read why a corrupt file failed', async () => {

@@ -1,30 +1,23 @@
 // Through the real UI in headless Chromium: a programmer changes the robot profile, then the season page
 // shows the red alliance's 12 branch targets for that profile, with the numbers the API gives.
-import { existsSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { branchTargetsSchema, type BranchTargets } from '../../shared/domain/season/targets';
-import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
-import { seedDemo } from '../../server/features/demo/seed';
-import { CLIENT_DIST, PROJECT_ROOT } from '../../server/runtime';
-import { launchBrowser } from '../support/browser';
-import { startTestServer, type TestServer } from '../support/test-server';
+import { DEMO_MEMBERS } from '../../server/features/demo/demo-team';
+import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
+import type { TestServer } from '../support/test-server';
 
-const SHOTS = path.join(PROJECT_ROOT, '.data', 'screenshots');
+let stack: BrowserStack;
 let server: TestServer;
-let browser: Browser;
+let browser: BrowserStack['browser'];
 
 beforeAll(async () => {
-  if (!existsSync(path.join(CLIENT_DIST, 'index.html'))) throw new Error('build the client first (npm test does)');
-  mkdirSync(SHOTS, { recursive: true });
-  server = await startTestServer({ clientDir: CLIENT_DIST });
-  await seedDemo(server.db.db);
-  browser = await launchBrowser();
+  stack = await startBrowserStack();
+  ({ server, browser } = stack);
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await stack?.close();
 });
 
 /** The API's answer, fetched from the page so it goes with the signed-in member's session. */
@@ -49,14 +42,7 @@ async function shoot(page: Page, name: string): Promise<void> {
 describe('season targets through the UI', () => {
   it('saves a robot profile and shows the red targets for it, equal to the API’s numbers', async () => {
     const programmer = DEMO_MEMBERS.find((m) => m.role === 'programmer')!;
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
-    const page = await context.newPage();
-
-    await page.goto(`${server.url}/sign-in`);
-    await page.getByLabel('E-mail').fill(programmer.email);
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await expect.poll(() => page.url()).not.toContain('/sign-in');
+    const page = await signInAs(stack, 'programmer');
 
     await page.getByRole('link', { name: 'Robot profile' }).first().click();
     await page.getByRole('button', { name: 'Save robot profile' }).waitFor();
@@ -102,6 +88,6 @@ describe('season targets through the UI', () => {
     await page.getByRole('heading', { name: 'Behind these targets' }).waitFor();
     await shoot(page, 'season-sources.png');
 
-    await context.close();
+    await page.context().close();
   });
 });

@@ -1,42 +1,26 @@
 // Through the real UI in headless Chromium: a lead invites a member, the mail arrives in the dev inbox,
 // the new member accepts, and the lead sees them in the members table with their role.
-import { existsSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
-import { seedDemo } from '../../server/features/demo/seed';
-import { CLIENT_DIST, PROJECT_ROOT } from '../../server/runtime';
-import { launchBrowser } from '../support/browser';
-import { startTestServer, type TestServer } from '../support/test-server';
+import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
+import type { TestServer } from '../support/test-server';
 
-const SHOTS = path.join(PROJECT_ROOT, '.data', 'screenshots');
+let stack: BrowserStack;
 let server: TestServer;
-let browser: Browser;
+let browser: BrowserStack['browser'];
 
 beforeAll(async () => {
-  if (!existsSync(path.join(CLIENT_DIST, 'index.html'))) throw new Error('build the client first (npm test does)');
-  mkdirSync(SHOTS, { recursive: true });
-  server = await startTestServer({ clientDir: CLIENT_DIST });
-  await seedDemo(server.db.db);
-  browser = await launchBrowser();
+  stack = await startBrowserStack();
+  ({ server, browser } = stack);
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await stack?.close();
 });
 
 describe('inviting a member through the UI', () => {
   it('signs in, invites, reads the mail in the inbox, accepts, and shows the new member with the role', async () => {
-    const lead = DEMO_MEMBERS.find((m) => m.role === 'lead')!;
-    const leadContext = await browser.newContext({ viewport: { width: 1280, height: 800 } });
-    const page = await leadContext.newPage();
-
-    await page.goto(`${server.url}/sign-in`);
-    await page.getByLabel('E-mail').fill(lead.email);
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await expect.poll(() => page.url()).not.toContain('/sign-in');
+    const page = await signInAs(stack, 'lead');
+    const leadContext = page.context();
 
     await page.goto(`${server.url}/settings/team`);
     await page.getByRole('textbox', { name: 'E-mail' }).fill('nia.calder@harborlight.example');
