@@ -3,6 +3,7 @@ import pg from 'pg';
 import { benchAuth } from '../bench/auth.bench';
 import { formatResults } from '../bench/bench-kit';
 import { benchRecordings } from '../bench/recordings.bench';
+import { benchRecordingsApi } from '../bench/recordings-api.bench';
 import { benchRelay } from '../bench/relay.bench';
 import { connectDb } from '../db/client';
 import { withDatabase } from '../db/embedded-postgres';
@@ -26,6 +27,8 @@ try {
   process.stdout.write(`relay\n${(await benchRelay({ databaseUrl: withDatabase(database.url, name), fanoutSeconds })).join('\n')}\n`);
   const recordings = await benchRecordings(handle.db, { databaseUrl: withDatabase(database.url, name) });
   process.stdout.write(`\nrecording storage\n${recordings.join('\n')}\n`);
+  const recordingsApi = await benchRecordingsApi({ databaseUrl: withDatabase(database.url, name) });
+  process.stdout.write(`\nrecordings API\n${recordingsApi.lines.join('\n')}\n`);
 } finally {
   await handle.close();
   await admin.query(`drop database if exists ${name} with (force)`);
