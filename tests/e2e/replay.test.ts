@@ -1,9 +1,11 @@
 // Through the real UI in headless Chromium: the demo coach opens a simulated match, plays it and sees the cursor
-// and the robot move, jumps to the next event, adds a note at the cursor, and opens a link to a moment.
+// and the robot move, jumps to the next event, adds a note at the cursor, and opens a link to a moment; the demo
+// programmer edits a recording's details, which the coach then sees read only.
 import { existsSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '../../shared/domain/roles';
 import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
 import { seedDemoRecordings } from '../../server/features/demo/demo-recordings';
 import { seedDemo } from '../../server/features/demo/seed';
@@ -28,13 +30,13 @@ afterAll(async () => {
   await server?.close();
 });
 
-async function signInAsCoach(): Promise<Page> {
-  const coach = DEMO_MEMBERS.find((m) => m.role === 'coach')!;
+async function signInAs(role: Role): Promise<Page> {
+  const member = DEMO_MEMBERS.find((m) => m.role === role)!;
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
   await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: server.url });
   const page = await context.newPage();
   await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(coach.email);
+  await page.getByLabel('E-mail').fill(member.email);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await expect.poll(() => page.url()).not.toContain('/sign-in');
@@ -47,7 +49,7 @@ const robotAt = (page: Page) =>
 
 describe('replay through the UI', () => {
   it('plays a simulated match, moves the field map, jumps to an event, takes a note and opens a link to a moment', async () => {
-    const page = await signInAsCoach();
+    const page = await signInAs('coach');
     await page.goto(`${server.url}/recordings?kind=simulated`);
     await page.getByRole('table').getByRole('row').nth(1).getByRole('link').first().click();
     await page.getByTestId('cursor-time').waitFor();
@@ -92,5 +94,42 @@ describe('replay through the UI', () => {
     // The coach deletes their own note.
     await page.getByRole('button', { name: /^Delete note/ }).click();
     await expect.poll(() => page.getByRole('list', { name: 'Notes' }).count()).toBe(0);
+  });
+
+  it('lets the programmer change the match number and operator of a recording, and shows them to the coach read only', async () => {
+    const page = await signInAs('programmer');
+    await page.goto(`${server.url}/recordings?kind=simulated`);
+    await page.getByRole('table').getByRole('row').nth(2).getByRole('link').first().click();
+    await page.getByTestId('cursor-time').waitFor();
+    const replayUrl = page.url();
+
+    const details = page.getByRole('form', { name: 'Recording details' });
+    await details.getByLabel('Match number', { exact: true }).fill('0');
+    await details.getByRole('button', { name: 'Save details' }).click();
+    await expect.poll(() => details.getByText('Match numbers start at 1').count()).toBe(1);
+
+    await details.getByLabel('Match number', { exact: true }).fill('42');
+    await details.getByLabel('Operator', { exact: true }).fill('Priya at the controls');
+    await details.getByRole('button', { name: 'Save details' }).click();
+    await details.getByText('Details saved').waitFor();
+    await details.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, 'replay-details-saved.png'), fullPage: false });
+
+    await page.reload();
+    await page.getByTestId('cursor-time').waitFor();
+    await expect.poll(() => details.getByLabel('Match number', { exact: true }).inputValue()).toBe('42');
+    expect(await details.getByLabel('Operator', { exact: true }).inputValue()).toBe('Priya at the controls');
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toContain('42');
+    await page.context().close();
+
+    const coach = await signInAs('coach');
+    await coach.goto(replayUrl);
+    await coach.getByTestId('cursor-time').waitFor();
+    await coach.getByText('Read only for your role').waitFor();
+    expect(await coach.getByRole('form', { name: 'Recording details' }).count()).toBe(0);
+    const facts = coach.getByRole('definition');
+    await expect.poll(() => facts.filter({ hasText: 'Priya at the controls' }).count()).toBe(1);
+    expect(await facts.filter({ hasText: /^42$/ }).count()).toBe(1);
+    await coach.context().close();
   });
 });

@@ -1,4 +1,4 @@
-import { keepPreviousData, queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
   recordingDetailSchema,
   recordingPageSchema,
@@ -35,6 +35,21 @@ export const useRecordings = (view: RecordingView) => useQuery(recordingsQuery(v
 
 export const recordingQuery = (id: string) => queryOptions({ queryKey: recordingKeys.one(id), queryFn: () => getRecording(id) });
 export const useRecording = (id: string) => useQuery(recordingQuery(id));
+
+/** PATCH one recording; the detail shows the answer at once, and the detail and every list page refetch. */
+export function useUpdateRecording(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (patch: RecordingPatch) => updateRecording(id, patch),
+    onSuccess: async (saved) => {
+      queryClient.setQueryData(recordingKeys.one(id), saved);
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: recordingKeys.one(id), exact: true }),
+        queryClient.invalidateQueries({ queryKey: recordingKeys.lists() }),
+      ]);
+    },
+  });
+}
 
 export type BulkProgress = { done: number; total: number; failed: { id: string; message: string }[] };
 

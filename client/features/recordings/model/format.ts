@@ -16,7 +16,7 @@ export const SOURCE_LABELS: Record<RecordingSummary['source'], string> = {
 
 export const ALLIANCE_LABELS: Record<Alliance, string> = { blue: 'Blue', red: 'Red' };
 
-const MATCH_TYPE_LABELS: Record<MatchType, { long: string; short: string }> = {
+export const MATCH_TYPE_LABELS: Record<MatchType, { long: string; short: string }> = {
   practice: { long: 'Practice', short: 'P' },
   qualification: { long: 'Qualification', short: 'Q' },
   playoff: { long: 'Playoff', short: 'PO' },

@@ -1,6 +1,6 @@
 import { useQueries, useQuery } from '@tanstack/react-query';
 import { useEffect, useMemo, useState } from 'react';
-import type { Role } from '../../../../shared/domain/roles';
+import { can, type Role } from '../../../../shared/domain/roles';
 import { adjacentMark, formatMoment, nextSpeed, parseMoment, stepTicks } from '../../../../shared/domain/timeline';
 import type { Signal } from '../../../../shared/protocol/messages';
 import type { RecordingDetail } from '../../../../shared/schemas/recording';
@@ -8,6 +8,8 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { Loading } from '../../../components/ui/loading';
 import { QueryError } from '../../../components/ui/query-error';
 import { Section } from '../../../components/ui/section';
+// The one component this feature takes from recordings: the details form saves with the recordings PATCH mutation.
+import { RecordingDetailsForm } from '../../recordings/components/recording-details-form';
 import { samplesQuery, useEvents, useNotes, useSignals } from '../api/replay';
 import { ReplayContext } from '../hooks/use-replay';
 import { createReplayStore, type ReplayStore } from '../model/replay-store';
@@ -197,6 +199,9 @@ function ReplayBody({ recording, me, signals, events, store }: ReplayBodyProps) 
           </Section>
           <Section title="Notes" className="p-4">
             <NotesPanel recordingId={recording.id} me={me} />
+          </Section>
+          <Section title="Details" className="p-4">
+            <RecordingDetailsForm recording={recording} role={me.role} canEdit={can(me.role, 'recordings.manage')} />
           </Section>
         </div>
       </div>
