@@ -33,7 +33,9 @@ export interface BenchMatchFile {
 
 /** A recording file of deterministic random walks for 200 signals over 9,000 ticks at 50 Hz. */
 export function makeMatchFile(): BenchMatchFile {
-  const signalName = (index: number) => `bench/signal_${index}`;
+  // The replay page's default traces (six) and the field map's pose come first, so a replay shows them.
+  const named = ['drive/speed', 'drive/velocity/vx', 'drive/velocity/vy', 'elevator/height', 'elevator/setpoint', 'battery/voltage', 'drive/pose/x', 'drive/pose/y', 'drive/pose/heading'];
+  const signalName = (index: number) => named[index] ?? `bench/signal_${index}`;
   const values = new Float32Array(TICKS * SIGNALS);
   let state = 4242;
   const random = () => ((state = (state * 1103515245 + 12345) >>> 0) / 2 ** 32);

@@ -5,6 +5,7 @@ import { formatResults } from '../bench/bench-kit';
 import { benchRecordings } from '../bench/recordings.bench';
 import { benchRecordingsApi } from '../bench/recordings-api.bench';
 import { benchRelay } from '../bench/relay.bench';
+import { benchReplayBrowser } from '../bench/replay-browser.bench';
 import { connectDb } from '../db/client';
 import { withDatabase } from '../db/embedded-postgres';
 import { runMigrations } from '../db/migrate';
@@ -27,8 +28,14 @@ try {
   process.stdout.write(`relay\n${(await benchRelay({ databaseUrl: withDatabase(database.url, name), fanoutSeconds })).join('\n')}\n`);
   const recordings = await benchRecordings(handle.db, { databaseUrl: withDatabase(database.url, name) });
   process.stdout.write(`\nrecording storage\n${recordings.join('\n')}\n`);
-  const recordingsApi = await benchRecordingsApi({ databaseUrl: withDatabase(database.url, name) });
+  const recordingsApi = await benchRecordingsApi({ databaseUrl: withDatabase(database.url, name), keepServer: true });
   process.stdout.write(`\nrecordings API\n${recordingsApi.lines.join('\n')}\n`);
+  try {
+    const replay = await benchReplayBrowser({ server: recordingsApi.server, recordingId: recordingsApi.recordingId });
+    process.stdout.write(`\nreplay in the browser\n${replay.join('\n')}\n`);
+  } finally {
+    await recordingsApi.server.stop();
+  }
 } finally {
   await handle.close();
   await admin.query(`drop database if exists ${name} with (force)`);
