@@ -16,6 +16,7 @@ import { Pager } from '../../features/recordings/components/pager';
 import { RecordingFilters } from '../../features/recordings/components/recording-filters';
 import { RecordingsTable } from '../../features/recordings/components/recordings-table';
 import { UploadPanel } from '../../features/recordings/components/upload-panel';
+import { RecordingDetailsForm } from '../../features/recordings/components/recording-details-form';
 import { ReplayPage } from '../../features/replay/components/replay-page';
 import { matchLabel } from '../../features/recordings/model/format';
 import {
@@ -142,7 +143,13 @@ export function ReplayComponent() {
             title={[r.metadata.event, matchLabel(r.metadata)?.long].filter(Boolean).join(' · ') || `${r.robot} recording`}
             actions={<ButtonLink to="/recordings">Back to recordings</ButtonLink>}
           />
-          <ReplayPage key={r.id} recording={r} me={{ name: me.user.name, role: me.role }} initialMoment={initialMoment} />
+          <ReplayPage
+            key={r.id}
+            recording={r}
+            me={{ name: me.user.name, role: me.role }}
+            initialMoment={initialMoment}
+            details={<RecordingDetailsForm recording={r} role={me.role} canEdit={can(me.role, 'recordings.manage')} />}
+          />
         </>
       )}
     </QueryGate>

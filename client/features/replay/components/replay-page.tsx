@@ -1,6 +1,6 @@
 import { useQueries, useQuery } from '@tanstack/react-query';
-import { useEffect, useMemo, useState } from 'react';
-import { can, type Role } from '../../../../shared/domain/roles';
+import { useEffect, useMemo, useState, type ReactNode } from 'react';
+import type { Role } from '../../../../shared/domain/roles';
 import { adjacentMark, formatMoment, nextSpeed, parseMoment, stepTicks } from '../../../../shared/domain/timeline';
 import type { Signal } from '../../../../shared/protocol/messages';
 import type { RecordingDetail } from '../../../../shared/schemas/recording';
@@ -9,7 +9,6 @@ import { Loading } from '../../../components/ui/loading';
 import { QueryError } from '../../../components/ui/query-error';
 import { Section } from '../../../components/ui/section';
 // The one component this feature takes from recordings: the details form saves with the recordings PATCH mutation.
-import { RecordingDetailsForm } from '../../recordings/components/recording-details-form';
 import { samplesQuery, useEvents, useNotes, useSignals } from '../api/replay';
 import { ReplayContext } from '../hooks/use-replay';
 import { createReplayStore, type ReplayStore } from '../model/replay-store';
@@ -25,10 +24,16 @@ const DEFAULT_PANES = [['drive/speed', 'drive/velocity/vx', 'drive/velocity/vy']
 const FIXED_VALUES = ['match/mode', 'state/machine', 'game/piece', 'target/branch', POSE.x, POSE.y, POSE.heading, 'battery/voltage'];
 const URL_WRITE_MS = 300;
 
-type ReplayPageProps = { recording: RecordingDetail; me: { name: string; role: Role }; initialMoment: string | null };
+type ReplayPageProps = {
+  recording: RecordingDetail;
+  me: { name: string; role: Role };
+  initialMoment: string | null;
+  /** The recording's details, composed in by the route (they belong to the recordings feature). */
+  details?: ReactNode;
+};
 
 /** The replay of one recording: one timeline cursor drives the traces, the field map, the values and the notes. */
-export function ReplayPage({ recording, me, initialMoment }: ReplayPageProps) {
+export function ReplayPage({ recording, me, initialMoment, details }: ReplayPageProps) {
   const signals = useSignals(recording.id);
   const events = useEvents(recording.id);
   const [store] = useState(() => createReplayStore(recording.durationS, parseMoment(initialMoment, recording.durationS) ?? 0));
@@ -46,12 +51,13 @@ export function ReplayPage({ recording, me, initialMoment }: ReplayPageProps) {
   }
   return (
     <ReplayContext value={store}>
-      <ReplayBody recording={recording} me={me} signals={signals.data.signals} events={events.data.events} store={store} />
+      <ReplayBody recording={recording} me={me} signals={signals.data.signals} events={events.data.events} store={store} details={details} />
     </ReplayContext>
   );
 }
 
 type ReplayBodyProps = {
+  details?: ReactNode;
   recording: RecordingDetail;
   me: { name: string; role: Role };
   signals: Signal[];
@@ -59,7 +65,7 @@ type ReplayBodyProps = {
   store: ReplayStore;
 };
 
-function ReplayBody({ recording, me, signals, events, store }: ReplayBodyProps) {
+function ReplayBody({ recording, me, signals, events, store, details }: ReplayBodyProps) {
   const byName = useMemo(() => new Map(signals.map((s) => [s.name, s])), [signals]);
   const [panes, setPanes] = useState<string[][]>(() => {
     const chosen = DEFAULT_PANES.map((names) => names.filter((n) => byName.has(n)));
@@ -200,9 +206,11 @@ function ReplayBody({ recording, me, signals, events, store }: ReplayBodyProps) 
           <Section title="Notes" className="p-4">
             <NotesPanel recordingId={recording.id} me={me} />
           </Section>
-          <Section title="Details" className="p-4">
-            <RecordingDetailsForm recording={recording} role={me.role} canEdit={can(me.role, 'recordings.manage')} />
-          </Section>
+          {details && (
+            <Section title="Details" className="p-4">
+              {details}
+            </Section>
+          )}
         </div>
       </div>
     </div>
