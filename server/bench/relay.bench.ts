@@ -11,11 +11,10 @@ import { WebSocket } from 'ws';
 import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
 import { season2025 } from '../../shared/domain/season/season-2025';
 import { encodeFrame } from '../../shared/protocol/frame-codec';
-import type { ServerMessage, Signal } from '../../shared/protocol/messages';
+import type { ServerMessage } from '../../shared/protocol/messages';
 import { RelayLink, type SocketLike } from '../../shared/protocol/relay-link';
 import { encodeTelemetry } from '../../shared/protocol/telemetry-codec';
 import { runHeadlessMatch } from '../../simulator/src/headless';
-import { RobotClient } from '../../simulator/src/robot-client';
 import { DEMO_PASSWORD } from '../features/demo/demo-team';
 import { freePort } from '../db/embedded-postgres';
 import { PROJECT_ROOT } from '../runtime';
@@ -184,24 +183,6 @@ async function until(test: () => boolean, timeoutMs: number): Promise<boolean> {
   return true;
 }
 
-const SIGNALS_200: Signal[] = Array.from({ length: 200 }, (_, index) => ({ index, name: `load/s${index}`, type: 'number', unit: '' }));
-
-/** A 200-signal stream at 50 Hz in batches of 5 ticks (10 batches a second), values that change every tick. */
-function startStream(robot: RobotClient): { stop(): void; sent(): number } {
-  robot.declareSignals(SIGNALS_200);
-  let tick = 0;
-  let sent = 0;
-  const timer = setInterval(() => {
-    const rows = Array.from({ length: 5 }, () => {
-      tick += 1;
-      return Array.from({ length: 200 }, (_, i) => Math.sin(tick / 10 + i) * 100);
-    });
-    robot.sendTelemetry(rows, tick * 20, 20);
-    sent += 1;
-  }, 100);
-  return { stop: () => clearInterval(timer), sent: () => sent };
-}
-
 const CLOCK_TICKS_PER_S = Number(execFileSync('getconf', ['CLK_TCK'], { encoding: 'utf8' }).trim()) || 100;
 
 /** User + system CPU time of a process so far (fields 14 and 15 of /proc/PID/stat). */
@@ -216,13 +197,18 @@ interface LoadProcess {
   stop(): Promise<void>;
 }
 
-/** Starts `viewers` relay viewers (and `stuck` stuck ones) in a process of their own. */
-async function startLoad(server: ServerChild, cookie: string, viewers: number, stuck: number): Promise<LoadProcess> {
-  const child = spawn(
-    process.execPath,
-    ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bench/viewer-load.ts'), '--url', server.relayUrl, '--cookie', cookie, '--origin', server.url, '--viewers', String(viewers), '--stuck', String(stuck)],
-    { cwd: PROJECT_ROOT, stdio: ['pipe', 'pipe', 'inherit'] },
-  );
+interface ChildLines {
+  command(text: string): void;
+  nextLine(): Promise<string>;
+  stop(): Promise<void>;
+}
+
+/** A bench helper process that reads commands on stdin and answers in lines on stdout; resolves once it says "ready". */
+async function startHelper(script: string, args: string[]): Promise<ChildLines> {
+  const child = spawn(process.execPath, ['--import', 'tsx', path.join(PROJECT_ROOT, script), ...args], {
+    cwd: PROJECT_ROOT,
+    stdio: ['pipe', 'pipe', 'inherit'],
+  });
   const lines: string[] = [];
   const waiters: ((line: string) => void)[] = [];
   let buffer = '';
@@ -238,17 +224,49 @@ async function startLoad(server: ServerChild, cookie: string, viewers: number, s
     }
   });
   const nextLine = () => (lines.length ? Promise.resolve(lines.shift()!) : new Promise<string>((resolve) => waiters.push(resolve)));
-  if ((await nextLine()) !== 'ready') throw new Error('the viewer load did not start');
+  if ((await nextLine()) !== 'ready') throw new Error(`${script} did not start`);
   return {
-    reset: () => child.stdin!.write('reset\n'),
-    async report() {
-      child.stdin!.write('report\n');
-      return (JSON.parse(await nextLine()) as { counts: number[] }).counts;
-    },
+    command: (text) => child.stdin!.write(`${text}\n`),
+    nextLine,
     async stop() {
       child.stdin!.write('quit\n');
       await new Promise((r) => child.once('exit', r));
     },
+  };
+}
+
+interface LoadProcess {
+  reset(): void;
+  report(): Promise<number[]>;
+  stop(): Promise<void>;
+}
+
+/** Starts `viewers` relay viewers (and `stuck` stuck ones) in a process of their own. */
+async function startLoad(server: ServerChild, cookie: string, viewers: number, stuck: number): Promise<LoadProcess> {
+  const helper = await startHelper('server/bench/viewer-load.ts', [
+    '--url', server.relayUrl, '--cookie', cookie, '--origin', server.url, '--viewers', String(viewers), '--stuck', String(stuck),
+  ]);
+  return {
+    reset: () => helper.command('reset'),
+    async report() {
+      helper.command('report');
+      return (JSON.parse(await helper.nextLine()) as { counts: number[] }).counts;
+    },
+    stop: () => helper.stop(),
+  };
+}
+
+/** The robot, in its own process: acks op/ values, streams 200 signals at 50 Hz on request. */
+async function startRobot(server: ServerChild, key: string) {
+  const helper = await startHelper('server/bench/robot-process.ts', ['--url', server.relayUrl, '--key', key]);
+  return {
+    stream: () => helper.command('stream'),
+    halt: () => helper.command('halt'),
+    async sent(): Promise<number> {
+      helper.command('report');
+      return (JSON.parse(await helper.nextLine()) as { sent: number }).sent;
+    },
+    stop: () => helper.stop(),
   };
 }
 
@@ -273,16 +291,7 @@ export async function benchRelay(options: RelayBenchOptions): Promise<string[]> 
     const key = await createRobotKey(server.url);
     const viewerCookie = (await signIn(server.url, 'viewer@harborlight.example')).split('|')[0]!;
     const operatorCookie = (await signIn(server.url, 'operator@harborlight.example')).split('|')[0]!;
-    const robot = new RobotClient({
-      url: server.relayUrl,
-      key,
-      name: 'Gullwing bench',
-      onValue: (channel, _v, rev, retained) => {
-        if (!retained) robot.ack(channel, rev);
-      },
-    });
-    robot.start();
-    await until(() => robot.status === 'open', 5000);
+    const robot = await startRobot(server, key);
     const panel = new Viewer(server.relayUrl, operatorCookie, server.url, 'panel');
     await until(() => panel.link.status === 'open', 5000);
 
@@ -296,7 +305,7 @@ export async function benchRelay(options: RelayBenchOptions): Promise<string[]> 
     await interleaved(200, echo.roundTrip, tapOnce);
     const quiet = await interleaved(500, echo.roundTrip, tapOnce);
     const load = await startLoad(server, viewerCookie, 20, 0);
-    const stream = startStream(robot);
+    robot.stream();
     await sleep(500);
     const loaded = await interleaved(500, echo.roundTrip, tapOnce);
     const viewerCounts = await load.report();
@@ -313,14 +322,14 @@ export async function benchRelay(options: RelayBenchOptions): Promise<string[]> 
     const fan = await startLoad(server, viewerCookie, 50, 1);
     await sleep(300);
     fan.reset();
-    const sentBefore = stream.sent();
+    const sentBefore = await robot.sent();
     const cpuBefore = cpuSeconds(server.child.pid!);
     const wallBefore = performance.now();
     await sleep(options.fanoutSeconds * 1000);
-    const sentDuring = stream.sent() - sentBefore;
+    const sentDuring = (await robot.sent()) - sentBefore;
     const cpu = cpuSeconds(server.child.pid!) - cpuBefore;
     const wall = (performance.now() - wallBefore) / 1000;
-    stream.stop();
+    robot.halt();
     await sleep(1000);
     const received = await fan.report();
     await fan.stop();
@@ -330,7 +339,7 @@ export async function benchRelay(options: RelayBenchOptions): Promise<string[]> 
         `healthy viewers with loss: ${lost}/50 (fewest received ${Math.min(...received)}); server CPU ${((cpu / wall) * 100).toFixed(1)} % of one core`,
     );
     panel.link.stop();
-    robot.stop();
+    await robot.stop();
   } finally {
     await server.stop();
     await echo.stop();
