@@ -8,6 +8,7 @@ import {
   processorPose,
   type RobotScoringProfile,
 } from './scoring-pose';
+import { tagById } from './reef-faces';
 import { season2025 } from './season-2025';
 
 const L = 17.548; // [FL] field length
@@ -64,6 +65,22 @@ describe('branchScoringPoses', () => {
     expect(g?.yM).toBeCloseTo(3.8608, 6);
     expect(h?.yM).toBeCloseTo(4.191, 6);
     expect(wrapDeg(g?.headingDeg ?? 0)).toBeCloseTo(180, 9);
+  });
+
+  // Each pose stands exactly depthM out along its face tag's normal (the face plane is the tag plane [FL]), and
+  // the two branches of a face are the manual's 1 ft 1 in = 0.3302 m apart along it (from memory).
+  it.each(['blue', 'red'] as const)('stands every %s pose exactly the configured depth in front of its face', (alliance) => {
+    const depthM = 0.473;
+    const poses = branchScoringPoses(season2025, alliance, { depthM, scoringSide: 'right' });
+    for (const pose of poses) {
+      const tag = tagById(season2025, pose.tagId);
+      const normal = { x: Math.cos((tag.yawDeg * Math.PI) / 180), y: Math.sin((tag.yawDeg * Math.PI) / 180) };
+      expect((pose.xM - tag.xM) * normal.x + (pose.yM - tag.yM) * normal.y).toBeCloseTo(depthM, 9);
+    }
+    for (let face = 0; face < 6; face += 1) {
+      const [left, right] = poses.filter((p) => p.faceIndex === face);
+      expect(Math.hypot(left!.xM - right!.xM, left!.yM - right!.yM)).toBeCloseTo(0.3302, 9);
+    }
   });
 
   it('returns all twelve letters A–L in order for each alliance', () => {
