@@ -3,16 +3,11 @@
 //     against a raw psql COPY FROM STDIN of the same samples, row per sample, in the same run;
 //  2. one signal for the whole match with GET /api/recordings/:id/samples: server time from `Server-Timing`
 //     when the route sends one, otherwise the time the client observes (said so in the figure's name).
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import { spawnSync } from 'node:child_process';
+import { psql, psqlCopy, signInDemo, startBenchServer, type BenchServer } from './bench-server';
 import type { RecordingRecord } from '../../shared/protocol/recording-file';
 import { encodeRecording, RECORDING_FORMAT, RECORDING_VERSION } from '../../shared/protocol/recording-file';
 import { encodeTelemetry } from '../../shared/protocol/telemetry-codec';
-import { freePort } from '../db/embedded-postgres';
-import { DEMO_PASSWORD } from '../features/demo/demo-team';
-import { PROJECT_ROOT } from '../runtime';
 
 const SIGNALS = 200;
 const TICKS = 3 * 60 * 50;
@@ -21,7 +16,6 @@ const RUNS = 3;
 const READS = 50;
 const READ_SIGNAL = 17;
 
-const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
 export interface BenchMatchFile {
@@ -57,51 +51,6 @@ export function makeMatchFile(): BenchMatchFile {
   return { bytes, values, signalName };
 }
 
-export interface BenchServer {
-  child: ChildProcess;
-  url: string;
-  stop(): Promise<void>;
-}
-
-/** The real server as a child process on a free port, with its own data directory. */
-export async function startBenchServer(databaseUrl: string): Promise<BenchServer> {
-  const port = await freePort();
-  const dataDir = mkdtempSync(path.join(os.tmpdir(), 'pitwall-bench-'));
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bin/serve.ts')], {
-    cwd: PROJECT_ROOT,
-    env: { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), PITWALL_DATA_DIR: dataDir, LOG_LEVEL: 'warn' },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  const url = `http://127.0.0.1:${port}`;
-  for (let i = 0; ; i += 1) {
-    if (await fetch(`${url}/api/health`).then((r) => r.ok, () => false)) break;
-    if (i > 300) throw new Error('the bench server did not start');
-    await sleep(50);
-  }
-  return {
-    child,
-    url,
-    async stop() {
-      child.kill('SIGTERM');
-      await new Promise((r) => child.once('exit', r));
-      rmSync(dataDir, { recursive: true, force: true });
-    },
-  };
-}
-
-/** Signs a demo member in: the Cookie header to send and the CSRF token for writes. */
-export async function signInDemo(url: string, email: string): Promise<{ cookie: string; csrf: string }> {
-  const csrf = ((await (await fetch(`${url}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
-  const res = await fetch(`${url}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: `pw_csrf=${csrf}`, 'x-csrf-token': csrf },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  if (!res.ok) throw new Error(`bench sign-in as ${email} failed: ${res.status}`);
-  const cookies = res.headers.getSetCookie().map((c) => c.split(';')[0]!);
-  return { cookie: [...cookies, `pw_csrf=${csrf}`].join('; '), csrf };
-}
-
 /** Uploads a recording file through the API; resolves with the new recording's id. */
 export async function uploadRecording(url: string, auth: { cookie: string; csrf: string }, bytes: Uint8Array<ArrayBuffer>): Promise<string> {
   const form = new FormData();
@@ -111,23 +60,6 @@ export async function uploadRecording(url: string, auth: { cookie: string; csrf:
   return ((await res.json()) as { id: string }).id;
 }
 
-function psqlCopy(databaseUrl: string, text: string): Promise<void> {
-  return new Promise((resolve, reject) => {
-    const child = spawn('psql', [databaseUrl, '-q', '-v', 'ON_ERROR_STOP=1', '-c', 'copy bench_api_samples (recording, signal_index, t_ms, value) from stdin'], {
-      stdio: ['pipe', 'ignore', 'pipe'],
-    });
-    let err = '';
-    child.stderr.on('data', (d) => (err += d));
-    child.on('error', reject);
-    child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`psql copy failed: ${err}`))));
-    child.stdin.end(text);
-  });
-}
-
-function psql(databaseUrl: string, command: string): void {
-  const result = spawnSync('psql', [databaseUrl, '-q', '-v', 'ON_ERROR_STOP=1', '-c', command], { encoding: 'utf8' });
-  if (result.status !== 0) throw new Error(`psql failed: ${result.stderr}`);
-}
 
 /** Sum of the `dur` values of a Server-Timing header, or undefined without one. */
 function serverTimingMs(header: string | null): number | undefined {
@@ -175,7 +107,7 @@ export async function benchRecordingsApi(options: { databaseUrl: string; keepSer
         uploadMs.push(performance.now() - t0);
         const text = copyText(run);
         t0 = performance.now();
-        await psqlCopy(databaseUrl, text);
+        await psqlCopy(databaseUrl, 'bench_api_samples', text);
         copyMs.push(performance.now() - t0);
       }
     } finally {

@@ -1,7 +1,8 @@
 // Recording storage: a 3-minute, 200-signal, 50 Hz match (1.8 M samples) through the recordings ingest
 // against row-per-sample baselines of the same samples (multi-row INSERT, and COPY FROM STDIN through psql
 // when a database URL is given and psql is on the PATH), then one whole signal read back from each.
-import { spawn, spawnSync } from 'node:child_process';
+import { psqlCopy } from './bench-server';
+import { spawnSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import type { TelemetryBatch } from '../../shared/protocol/messages';
@@ -56,18 +57,6 @@ async function timed(fn: () => Promise<void>): Promise<number> {
   return performance.now() - t0;
 }
 
-function psqlCopy(databaseUrl: string, text: string): Promise<void> {
-  return new Promise((resolve, reject) => {
-    const child = spawn('psql', [databaseUrl, '-q', '-v', 'ON_ERROR_STOP=1', '-c', 'copy bench_samples (recording, signal_index, t_ms, value) from stdin'], {
-      stdio: ['pipe', 'ignore', 'pipe'],
-    });
-    let err = '';
-    child.stderr.on('data', (d) => (err += d));
-    child.on('error', reject);
-    child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`psql copy failed: ${err}`))));
-    child.stdin.end(text);
-  });
-}
 
 export async function benchRecordings(db: Db, options: { databaseUrl?: string } = {}): Promise<string[]> {
   const match = makeMatch();
@@ -135,7 +124,7 @@ export async function benchRecordings(db: Db, options: { databaseUrl?: string } 
       );
       if (hasPsql) {
         const text = copyText(run * 2 + 1);
-        copyMs.push(await timed(() => psqlCopy(options.databaseUrl!, text)));
+        copyMs.push(await timed(() => psqlCopy(options.databaseUrl!, 'bench_samples', text)));
       }
     }
     await db.execute(sql`analyze bench_samples`);

@@ -3,21 +3,19 @@
 //  2. fan-out of 200-signal batches at 50 Hz to 50 viewers (and one stuck viewer) for 60 s, with the server's
 //     CPU share;
 //  3. bytes on the wire per telemetry sample of the simulator's stream, against the field's bandwidth limit.
-import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import os from 'node:os';
+import { execFileSync, spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { WebSocket } from 'ws';
 import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
 import { season2025 } from '../../shared/domain/season/season-2025';
 import { encodeFrame } from '../../shared/protocol/frame-codec';
-import type { ServerMessage } from '../../shared/protocol/messages';
 import { RelayLink, type SocketLike } from '../../shared/protocol/relay-link';
 import { encodeTelemetry } from '../../shared/protocol/telemetry-codec';
 import { runHeadlessMatch } from '../../simulator/src/headless';
-import { DEMO_PASSWORD } from '../features/demo/demo-team';
 import { freePort } from '../db/embedded-postgres';
 import { PROJECT_ROOT } from '../runtime';
+import { signInDemo, startBenchServer, type BenchServer } from './bench-server';
 
 export interface RelayBenchOptions {
   databaseUrl: string;
@@ -63,53 +61,8 @@ async function startEcho(): Promise<{ roundTrip(): Promise<number>; stop(): Prom
   };
 }
 
-interface ServerChild {
-  child: ChildProcess;
-  url: string;
-  relayUrl: string;
-  stop(): Promise<void>;
-}
-
-async function startServerProcess(databaseUrl: string): Promise<ServerChild> {
-  const port = await freePort();
-  const dataDir = mkdtempSync(path.join(os.tmpdir(), 'pitwall-bench-'));
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bin/serve.ts')], {
-    cwd: PROJECT_ROOT,
-    env: { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), PITWALL_DATA_DIR: dataDir, LOG_LEVEL: 'warn' },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  const url = `http://127.0.0.1:${port}`;
-  for (let i = 0; ; i += 1) {
-    const ok = await fetch(`${url}/api/health`).then((r) => r.ok, () => false);
-    if (ok) break;
-    if (i > 300) throw new Error('the bench server did not start');
-    await sleep(50);
-  }
-  return {
-    child,
-    url,
-    relayUrl: `ws://127.0.0.1:${port}/relay`,
-    async stop() {
-      child.kill('SIGTERM');
-      await new Promise((r) => child.once('exit', r));
-      rmSync(dataDir, { recursive: true, force: true });
-    },
-  };
-}
-
-async function signIn(url: string, email: string): Promise<string> {
-  const csrf = ((await (await fetch(`${url}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
-  const res = await fetch(`${url}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: `pw_csrf=${csrf}`, 'x-csrf-token': csrf },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  const cookies = res.headers.getSetCookie().map((c) => c.split(';')[0]!);
-  return [...cookies, `pw_csrf=${csrf}`].join('; ') + `|${csrf}`;
-}
-
 async function createRobotKey(url: string): Promise<string> {
-  const [cookie, csrf] = (await signIn(url, 'lead@harborlight.example')).split('|') as [string, string];
+  const { cookie, csrf } = await signInDemo(url, 'lead@harborlight.example');
   const res = await fetch(`${url}/api/team/robot-keys`, {
     method: 'POST',
     headers: { 'content-type': 'application/json', cookie, 'x-csrf-token': csrf },
@@ -242,7 +195,7 @@ interface LoadProcess {
 }
 
 /** Starts `viewers` relay viewers (and `stuck` stuck ones) in a process of their own. */
-async function startLoad(server: ServerChild, cookie: string, viewers: number, stuck: number): Promise<LoadProcess> {
+async function startLoad(server: BenchServer, cookie: string, viewers: number, stuck: number): Promise<LoadProcess> {
   const helper = await startHelper('server/bench/viewer-load.ts', [
     '--url', server.relayUrl, '--cookie', cookie, '--origin', server.url, '--viewers', String(viewers), '--stuck', String(stuck),
   ]);
@@ -257,7 +210,7 @@ async function startLoad(server: ServerChild, cookie: string, viewers: number, s
 }
 
 /** The robot, in its own process: acks op/ values, streams 200 signals at 50 Hz on request. */
-async function startRobot(server: ServerChild, key: string) {
+async function startRobot(server: BenchServer, key: string) {
   const helper = await startHelper('server/bench/robot-process.ts', ['--url', server.relayUrl, '--key', key]);
   return {
     stream: () => helper.command('stream'),
@@ -286,11 +239,11 @@ async function interleaved(count: number, a: () => Promise<number>, b: () => Pro
 export async function benchRelay(options: RelayBenchOptions): Promise<string[]> {
   const lines: string[] = [];
   const echo = await startEcho();
-  const server = await startServerProcess(options.databaseUrl);
+  const server = await startBenchServer(options.databaseUrl);
   try {
     const key = await createRobotKey(server.url);
-    const viewerCookie = (await signIn(server.url, 'viewer@harborlight.example')).split('|')[0]!;
-    const operatorCookie = (await signIn(server.url, 'operator@harborlight.example')).split('|')[0]!;
+    const viewerCookie = (await signInDemo(server.url, 'viewer@harborlight.example')).cookie;
+    const operatorCookie = (await signInDemo(server.url, 'operator@harborlight.example')).cookie;
     const robot = await startRobot(server, key);
     const panel = new Viewer(server.relayUrl, operatorCookie, server.url, 'panel');
     await until(() => panel.link.status === 'open', 5000);

@@ -4,7 +4,7 @@
 // the page counts its requestAnimationFrame callbacks.
 import { buildClientIfStale } from '../bin/build-client';
 import { launchBrowser } from '../../tests/support/browser';
-import { signInDemo, type BenchServer } from './recordings-api.bench';
+import { signInDemo, type BenchServer } from './bench-server';
 
 const RUNS = 5;
 const SCRUB_MS = 3000;
