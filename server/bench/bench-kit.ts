@@ -27,3 +27,21 @@ export function formatResults(results: BenchResult[]): string {
   });
   return rows.join('\n');
 }
+
+/**
+ * Deterministic random walks, row-major (tick k, signal i at k·signals + i); a third of the signals hold
+ * still for stretches, as real telemetry does.
+ */
+export function randomWalks(ticks: number, signals: number, seed: number): Float32Array {
+  const values = new Float32Array(ticks * signals);
+  let state = seed;
+  const random = () => ((state = (state * 1103515245 + 12345) >>> 0) / 2 ** 32);
+  const current = new Float32Array(signals);
+  for (let k = 0; k < ticks; k += 1) {
+    for (let i = 0; i < signals; i += 1) {
+      if (i % 3 !== 0 || random() < 0.05) current[i] = current[i]! + (random() - 0.5);
+      values[k * signals + i] = current[i]!;
+    }
+  }
+  return values;
+}

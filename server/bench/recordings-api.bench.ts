@@ -4,6 +4,7 @@
 //  2. one signal for the whole match with GET /api/recordings/:id/samples: server time from `Server-Timing`
 //     when the route sends one, otherwise the time the client observes (said so in the figure's name).
 import { spawnSync } from 'node:child_process';
+import { randomWalks } from './bench-kit';
 import { psql, psqlCopy, signInDemo, startBenchServer, type BenchServer } from './bench-server';
 import type { RecordingRecord } from '../../shared/protocol/recording-file';
 import { encodeRecording, RECORDING_FORMAT, RECORDING_VERSION } from '../../shared/protocol/recording-file';
@@ -30,16 +31,7 @@ export function makeMatchFile(): BenchMatchFile {
   // The replay page's default traces (six) and the field map's pose come first, so a replay shows them.
   const named = ['drive/speed', 'drive/velocity/vx', 'drive/velocity/vy', 'elevator/height', 'elevator/setpoint', 'battery/voltage', 'drive/pose/x', 'drive/pose/y', 'drive/pose/heading'];
   const signalName = (index: number) => named[index] ?? `bench/signal_${index}`;
-  const values = new Float32Array(TICKS * SIGNALS);
-  let state = 4242;
-  const random = () => ((state = (state * 1103515245 + 12345) >>> 0) / 2 ** 32);
-  const current = new Float32Array(SIGNALS);
-  for (let k = 0; k < TICKS; k += 1) {
-    for (let i = 0; i < SIGNALS; i += 1) {
-      if (i % 3 !== 0 || random() < 0.05) current[i] = current[i]! + (random() - 0.5);
-      values[k * SIGNALS + i] = current[i]!;
-    }
-  }
+  const values = randomWalks(TICKS, SIGNALS, 4242);
   const records: RecordingRecord[] = [
     { type: 'signals', signals: Array.from({ length: SIGNALS }, (_, index) => ({ index, name: signalName(index), type: 'number' as const, unit: '' })) },
   ];

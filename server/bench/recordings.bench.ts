@@ -12,7 +12,7 @@ import type { Db } from '../db/client';
 import { teams } from '../db/schema/index';
 import { recordingsStore } from '../features/recordings/recordings.repo';
 import { createRecordingsService } from '../features/recordings/recordings.service';
-import { formatResults, measure } from './bench-kit';
+import { formatResults, measure, randomWalks } from './bench-kit';
 
 const SIGNALS = 200;
 const TICKS = 3 * 60 * 50;
@@ -32,16 +32,7 @@ interface BenchMatch {
 /** Deterministic random walks; a third of the signals hold still for stretches, as real telemetry does. */
 function makeMatch(): BenchMatch {
   const signals: Signal[] = Array.from({ length: SIGNALS }, (_, index) => ({ index, name: `bench/signal_${index}`, type: 'number', unit: '' }));
-  const values = new Float32Array(TICKS * SIGNALS);
-  let state = 12345;
-  const random = () => ((state = (state * 1103515245 + 12345) >>> 0) / 2 ** 32);
-  const current = new Float32Array(SIGNALS);
-  for (let k = 0; k < TICKS; k += 1) {
-    for (let i = 0; i < SIGNALS; i += 1) {
-      if (i % 3 !== 0 || random() < 0.05) current[i] = current[i]! + (random() - 0.5);
-      values[k * SIGNALS + i] = current[i]!;
-    }
-  }
+  const values = randomWalks(TICKS, SIGNALS, 12345);
   const batches: TelemetryBatch[] = [];
   for (let k = 0, seq = 0; k < TICKS; k += BATCH_TICKS, seq += 1) {
     const rows = Array.from({ length: BATCH_TICKS }, (_, j) => values.subarray((k + j) * SIGNALS, (k + j + 1) * SIGNALS));

@@ -65,4 +65,4 @@ if (existsSync(report)) {
 const total = ((Date.now() - started) / 1000).toFixed(1);
 process.stdout.write(`\ntests took ${((Date.now() - t0) / 1000).toFixed(1)} s; the whole command ${total} s\n`);
 process.stdout.write(`${passed} passed, ${failed} failed\n`);
-process.exit(vitest.status ?? 1);
+process.exitCode = vitest.status ?? 1;
