@@ -26,11 +26,16 @@ const KEY = Symbol.for('pitwall.test-postgres');
 type Holder = { [KEY]?: Promise<SharedCluster> };
 const holder = globalThis as Holder;
 
+/** `.data/pg-test`, or PITWALL_TEST_PG_DIR so two test runs in one checkout keep to their own clusters. */
+function testClusterDir(): string {
+  return process.env.PITWALL_TEST_PG_DIR ?? path.join(PROJECT_ROOT, '.data', 'pg-test');
+}
+
 async function boot(): Promise<SharedCluster> {
   const given = process.env.DATABASE_URL;
   const cluster = given
     ? { adminUrl: given, stop: async () => {} }
-    : await startEmbeddedPostgres({ dataDir: path.join(PROJECT_ROOT, '.data', 'pg-test'), ephemeral: true });
+    : await startEmbeddedPostgres({ dataDir: testClusterDir(), ephemeral: true });
   const template = `pitwall_test_template_${process.pid}`;
   const admin = new pg.Client({ connectionString: cluster.adminUrl });
   await admin.connect();
