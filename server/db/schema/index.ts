@@ -2,3 +2,4 @@ export * from './auth';
 export * from './robot';
 export * from './recordings';
 export * from './notes';
+export * from './panels';
