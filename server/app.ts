@@ -10,6 +10,7 @@ import { checkCsrf, loadSession, type CookiePolicy } from './features/auth/sessi
 import { createSessionTokens } from './features/auth/session-token';
 import { healthRouter } from './features/health/health.routes';
 import { recorderRepo } from './features/recorder/recorder.repo';
+import { recorderRouter } from './features/recorder/recorder.routes';
 import { createRecorder, type RecorderOptions } from './features/recorder/recorder.service';
 import { recordingsStore } from './features/recordings/recordings.repo';
 import { createRecordingsService } from './features/recordings/recordings.service';
@@ -25,6 +26,7 @@ import { teamRouter } from './features/team/team.routes';
 import { createTeamService } from './features/team/team.service';
 import { AppError, errorHandler } from './lib/errors';
 import type { Logger } from './lib/logger';
+import { markRequestStart } from './lib/server-timing';
 import { createRelay, type Relay, type RelayDeps } from './relay/relay-server';
 import { relayAuthenticators } from './relay/relay-auth';
 import type { TelemetryStore } from './relay/telemetry-store';
@@ -96,6 +98,7 @@ export function createApp(deps: AppDeps): App {
   app.set('trust proxy', 'loopback');
 
   const api = express.Router();
+  api.use(markRequestStart);
   api.use(express.json({ limit: '256kb' }));
   api.use(cookieParser());
   api.use(checkCsrf);
@@ -106,6 +109,7 @@ export function createApp(deps: AppDeps): App {
   api.use(seasonRouter({ season, team }));
   api.use(recordingsRouter({ recordings }));
   api.use(notesRouter({ db: deps.db }));
+  api.use(recorderRouter({ recorder }));
   api.use(() => {
     throw new AppError('not_found', 'No such API route');
   });

@@ -6,6 +6,7 @@
 // a reconnect lands in the recording it belonged to. Its storage key (recordings.stream_id) is
 // `<streamId>:<fromSeq>`, unique per stream.
 import type { ChannelValue, Sender } from '../../../shared/protocol/messages';
+import type { RecorderRobot } from '../../../shared/schemas/recorder';
 import type { Logger } from '../../lib/logger';
 import { PgTelemetryStore } from '../../relay/pg-telemetry-store';
 import type { DurableMessage, StreamObserver, StreamRef, TelemetryStore } from '../../relay/telemetry-store';
@@ -313,6 +314,21 @@ export function createRecorder(options: RecorderOptions) {
         return open.recordingId;
       }
       return undefined;
+    },
+
+    /** The team's connected robots and the recording each is making, for the live page and the recorder routes. */
+    status(teamId: string): RecorderRobot[] {
+      const byRobot = new Map<string, RecorderRobot>();
+      for (const state of streams.values()) {
+        if (state.ref.teamId !== teamId || state.connections === 0) continue;
+        const open = openSegment(state);
+        byRobot.set(state.ref.robot, {
+          robot: state.ref.robot,
+          mode: state.mode ?? null,
+          recording: open ? { recordingId: open.recordingId ?? null, kind: open.kind, isManual: open.manual } : null,
+        });
+      }
+      return [...byRobot.values()].sort((a, b) => a.robot.localeCompare(b.robot));
     },
 
     /** Resolves once every stream's queued storage work is done (shutdown, tests). */

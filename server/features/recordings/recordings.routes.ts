@@ -15,6 +15,7 @@ import {
   uploadedSchema,
   uploadFieldsSchema,
 } from '../../../shared/schemas/recording';
+import { setServerTiming } from '../../lib/server-timing';
 import { actorOf, requireAction } from '../auth/session.middleware';
 import { samplesJson } from './recording-files';
 import type { RecordingsService } from './recordings.service';
@@ -61,7 +62,9 @@ export function recordingsRouter(deps: { recordings: RecordingsService; uploadLi
   router.get('/recordings/:id/samples', requireAction('team.read'), async (req, res) => {
     const { id } = recordingParamsSchema.parse(req.params);
     const query = samplesQuerySchema.parse(req.query);
-    res.type('json').send(samplesJson(samplesSchema.parse(await recordings.samples(actorOf(req), id, query))));
+    const body = samplesJson(samplesSchema.parse(await recordings.samples(actorOf(req), id, query)));
+    setServerTiming(res);
+    res.type('json').send(body);
   });
 
   router.get('/recordings/:id/events', requireAction('team.read'), async (req, res) => {
