@@ -207,6 +207,8 @@ export const createPanelBodySchema = z.object({
   name: panelNameSchema,
   /** Omitted: the starter document for the device. */
   document: panelDocumentSchema.optional(),
+  /** The device of the starter document when `document` is omitted (default: the 1280 × 800 tablet, landscape). */
+  device: deviceSchema.optional(),
 });
 export type CreatePanelBody = z.infer<typeof createPanelBodySchema>;
 
@@ -218,6 +220,10 @@ export const updatePanelBodySchema = z.object({
   message: z.string().trim().max(200).optional(),
 });
 export type UpdatePanelBody = z.infer<typeof updatePanelBodySchema>;
+
+/** `POST /api/panels/:id/duplicate`; without a name the copy is called "<name> (copy)". */
+export const duplicatePanelBodySchema = z.object({ name: panelNameSchema.optional() });
+export type DuplicatePanelBody = z.infer<typeof duplicatePanelBodySchema>;
 
 export const publishPanelBodySchema = z.object({ versionId: z.string().uuid({ message: 'Not a version id' }) });
 export const panelVersionListSchema = z.object({ versions: z.array(panelVersionSummarySchema) });
