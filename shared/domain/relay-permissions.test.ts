@@ -28,3 +28,25 @@ describe('canSubscribe', () => {
     expect(canSubscribe('robot', 'robot/')).toBe(false);
   });
 });
+
+// Drill channels (the drills issue): coaches send calls like leads and programmers; operators answer them.
+const DRILL_TABLE = [
+  ['lead', true, true],
+  ['programmer', true, true],
+  ['operator', false, true],
+  ['coach', true, true],
+  ['viewer', false, false],
+  ['robot', false, false],
+] as const;
+
+describe('canPublish on drill channels', () => {
+  it.each(DRILL_TABLE)('%s: op/drill/call %s, op/drill/answer %s', (role, call, answer) => {
+    expect(canPublish(role, 'op/drill/call')).toBe(call);
+    expect(canPublish(role, 'op/drill/answer')).toBe(answer);
+  });
+
+  it('leaves coaches out of the other op/ channels', () => {
+    expect(canPublish('coach', 'op/reef/level')).toBe(false);
+    expect(canPublish('coach', 'op/drillcall')).toBe(false);
+  });
+});
