@@ -1,0 +1,70 @@
+import type { CSSProperties } from 'react';
+import type { Theme, TileOf, TileOption } from '../../../shared/schemas/panel';
+import { PhaseChip } from './phase-chip';
+import { PressTarget } from './press-target';
+import { TileHeading } from './tile-frame';
+import type { ChannelLive } from './tile-types';
+
+type OptionTile = TileOf<'level-picker' | 'station-picker' | 'algae-picker' | 'cage-picker' | 'choice-pad'>;
+
+type OptionPickerTileProps = {
+  tile: OptionTile;
+  theme: Theme;
+  isDesign: boolean;
+  canWrite: boolean;
+  /** Tile width ÷ height in pixels: a tall tile stacks its options, a wide one lines them up. */
+  aspect: number;
+  live: ChannelLive | undefined;
+  onChoose?: (value: string) => void;
+};
+
+/** Columns for `count` options in a box of `aspect`: one row when wide, one column when tall, a grid between. */
+export function optionColumns(count: number, aspect: number): number {
+  if (count <= 1) return 1;
+  let best = { columns: 1, score: -Infinity };
+  for (let columns = 1; columns <= count; columns += 1) {
+    const rows = Math.ceil(count / columns);
+    // The most square cells win: each option's shortest side as a share of the box.
+    const score = Math.min(aspect / columns, 1 / rows) - (columns * rows - count) * 0.01;
+    if (score > best.score) best = { columns, score };
+  }
+  return best.columns;
+}
+
+/** Level, station, algae and cage pickers and the choice pad: one big segment per option. */
+export function OptionPickerTile({ tile, theme, isDesign, canWrite, aspect, live, onChoose }: OptionPickerTileProps) {
+  const columns = optionColumns(tile.options.length, aspect);
+  const chosen = live?.value;
+  return (
+    <>
+      <TileHeading label={tile.label} ink={theme[tile.ink]} aside={isDesign ? undefined : <PhaseChip live={chosen === undefined ? undefined : live} theme={theme} />} />
+      <div
+        role="group"
+        aria-label={tile.label || tile.channel}
+        className="grid min-h-0 flex-1 gap-[2.5cqmin] p-[3cqmin]"
+        style={{ gridTemplateColumns: `repeat(${columns}, minmax(0, 1fr))` }}
+      >
+        {tile.options.map((o: TileOption) => {
+          const isActive = chosen === o.value;
+          const style: CSSProperties = isActive
+            ? { background: theme.accent, color: theme.accentText, boxShadow: `0 0 0 3px ${theme.text} inset` }
+            : { background: theme.canvas, color: theme.text, boxShadow: `inset 0 0 0 1.5px ${theme.muted}` };
+          return (
+            <PressTarget
+              key={o.value}
+              label={`${tile.label ? `${tile.label} ` : ''}${o.label}`}
+              isActive={isActive}
+              isStatic={isDesign}
+              isDisabled={!isDesign && !canWrite}
+              onPress={() => onChoose?.(o.value)}
+              className="flex min-h-0 min-w-0 touch-none items-center justify-center rounded-[clamp(4px,4cqmin,12px)] px-1 text-[clamp(14px,11cqmin,56px)] leading-none font-bold transition-[transform,filter] duration-75 select-none disabled:opacity-45 data-pressed:scale-[0.96] data-pressed:brightness-125"
+              style={style}
+            >
+              <span className="truncate">{o.label}</span>
+            </PressTarget>
+          );
+        })}
+      </div>
+    </>
+  );
+}
