@@ -12,7 +12,9 @@ import {
   quantileSorted,
   reduceRelay,
   RelayClient,
+  selectionsToResend,
   type RelayAction,
+  type RelayClientOptions,
   type RelayState,
 } from './relay-client';
 
@@ -218,7 +220,7 @@ class FakeSocket implements SocketLike {
   }
 }
 
-function harness() {
+function harness(options: Partial<RelayClientOptions> = {}) {
   let nowMs = 0;
   const timers = new Map<number, { at: number; fn: () => void }>();
   let nextTimer = 1;
@@ -240,7 +242,7 @@ function harness() {
       random: () => 0.5,
       scheduleFlush: (fn) => frames.push(fn),
     },
-    { hello: { kind: 'viewer', name: 'Live page' }, heartbeatMs: 1000, staleMs: 5000, releaseGraceMs: 2000 },
+    { hello: { kind: 'viewer', name: 'Live page' }, heartbeatMs: 1000, staleMs: 5000, releaseGraceMs: 2000, ...options },
   );
   return {
     client,
@@ -342,5 +344,68 @@ describe('RelayClient', () => {
     h.paint();
     expect(h.client.getSnapshot().status).toBe('stopped');
     expect(h.sockets).toHaveLength(1);
+  });
+
+  it('publishes the kept selection again after a reconnect, marked as a resend, and tracks its ack', async () => {
+    const h = harness({ hello: { kind: 'panel', name: 'Run mode' }, resendAfterReconnect: true });
+    h.client.subscribe(() => {});
+    const first = h.sockets[0]!;
+    first.open();
+    first.receive(WELCOME);
+    h.client.publish('op/reef/branch', 'C');
+    h.client.publish('op/reef/level', 'L2');
+    h.client.publish('op/reef/branch', 'G');
+    h.client.dropConnection();
+    h.advance(10_000);
+    const second = h.sockets[1]!;
+    second.open();
+    second.receive({ ...WELCOME, sessionId: 's-me-2' });
+    const resent = second.sent.filter((m) => m.type === 'publish');
+    expect(resent).toEqual([
+      { type: 'publish', id: expect.any(Number), channel: 'op/reef/branch', value: 'G' },
+      { type: 'publish', id: expect.any(Number), channel: 'op/reef/level', value: 'L2' },
+    ]);
+    const id = (resent[0] as { id: number }).id;
+    second.receive({ type: 'published', id, channel: 'op/reef/branch', rev: 9 });
+    second.receive({ type: 'acked', channel: 'op/reef/branch', rev: 9, relayRttMs: 4, robot: 'Gullwing' });
+    h.paint();
+    const state = h.client.getSnapshot();
+    const latest = state.publishes[state.latestPublish['op/reef/branch']!]!;
+    expect(latest).toMatchObject({ value: 'G', state: 'acked', isResend: true });
+  });
+
+  it('sends a selection tapped while the link was down as soon as it is back', () => {
+    const h = harness({ resendAfterReconnect: true });
+    h.client.subscribe(() => {});
+    h.client.publish('op/station', 'right');
+    const socket = h.sockets[0]!;
+    socket.open();
+    socket.receive(WELCOME);
+    expect(socket.sent.filter((m) => m.type === 'publish')).toEqual([{ type: 'publish', id: expect.any(Number), channel: 'op/station', value: 'right' }]);
+  });
+
+  it('resends nothing when not asked to', () => {
+    const h = harness();
+    h.client.subscribe(() => {});
+    h.sockets[0]!.open();
+    h.sockets[0]!.receive(WELCOME);
+    h.client.publish('op/reef/branch', 'C');
+    h.client.dropConnection();
+    h.advance(10_000);
+    h.sockets[1]!.open();
+    h.sockets[1]!.receive(WELCOME);
+    expect(h.sockets[1]!.sent.some((m) => m.type === 'publish')).toBe(false);
+    expect(h.client.keptSelections().size).toBe(0);
+  });
+});
+
+describe('selectionsToResend', () => {
+  it('lists each channel once with its newest value, in first-chosen order', () => {
+    const kept = new Map<string, string>([['op/reef/branch', 'A'], ['op/cage', 'deep']]);
+    kept.set('op/reef/branch', 'K');
+    expect(selectionsToResend(kept)).toEqual([
+      { channel: 'op/reef/branch', value: 'K' },
+      { channel: 'op/cage', value: 'deep' },
+    ]);
   });
 });

@@ -92,6 +92,8 @@ export type PublishTrack = {
   relayRttMs?: number;
   /** True when the ack came after the publish was called stale. */
   isLate?: boolean;
+  /** True when the client sent it again by itself after a reconnect (resendAfterReconnect). */
+  isResend?: boolean;
   refusal?: { code: RelayErrorCode | 'not_connected'; message: string };
 };
 
@@ -187,8 +189,8 @@ export function pushNewest<T>(list: readonly T[], item: T, max: number): T[] {
 export type RelayAction =
   | { type: 'status'; status: LinkStatus; detail: string; atMs: number }
   | { type: 'message'; message: ServerMessage; atMs: number }
-  | { type: 'sent'; id: number; channel: string; value: ChannelValue; atMs: number }
-  | { type: 'unsent'; id: number; channel: string; value: ChannelValue; atMs: number }
+  | { type: 'sent'; id: number; channel: string; value: ChannelValue; atMs: number; isResend?: boolean }
+  | { type: 'unsent'; id: number; channel: string; value: ChannelValue; atMs: number; isResend?: boolean }
   | { type: 'publish_timeout'; id: number }
   | { type: 'clock'; clock: ClockSample | undefined };
 
@@ -321,6 +323,7 @@ export function reduceRelay(state: RelayState, action: RelayAction): RelayState 
     case 'sent':
     case 'unsent': {
       const track: PublishTrack = { id: action.id, channel: action.channel, value: action.value, sentAtMs: action.atMs, state: 'pending' };
+      if (action.isResend) track.isResend = true;
       if (action.type === 'unsent') {
         track.state = 'refused';
         track.refusal = { code: 'not_connected', message: 'Not sent: the relay is not connected.' };
@@ -359,6 +362,16 @@ export interface RelayClientOptions {
   releaseGraceMs?: number;
   heartbeatMs?: number;
   staleMs?: number;
+  /**
+   * Keep the newest value published on each channel (the operator's current selection) and publish it again
+   * after every reconnect, so a robot that missed it while the link was down, or a restarted relay, has it.
+   */
+  resendAfterReconnect?: boolean;
+}
+
+/** What to publish again after a reconnect: every kept selection, in the order the channels were first chosen. */
+export function selectionsToResend(kept: ReadonlyMap<string, ChannelValue>): { channel: string; value: ChannelValue }[] {
+  return [...kept].map(([channel, value]) => ({ channel, value }));
 }
 
 export type PublishTicket = { id: number; channel: string; settled: Promise<PublishTrack> };
@@ -377,6 +390,7 @@ export class RelayClient {
   private clockTimer: unknown;
   private nextId = 1;
   private readonly waiting = new Map<number, (track: PublishTrack) => void>();
+  private readonly kept = new Map<string, ChannelValue>();
 
   constructor(
     private readonly deps: RelayClientDeps,
@@ -388,7 +402,10 @@ export class RelayClient {
       deps,
       { hello: options.hello, heartbeatMs: options.heartbeatMs, staleMs: options.staleMs },
       {
-        onOpen: () => this.link.send({ type: 'subscribe', prefixes: ['op/', 'robot/', 'sys/'] }),
+        onOpen: () => {
+          this.link.send({ type: 'subscribe', prefixes: ['op/', 'robot/', 'sys/'] });
+          if (this.options.resendAfterReconnect) for (const s of selectionsToResend(this.kept)) this.send(s.channel, s.value, true);
+        },
         onMessage: (message) => this.dispatch({ type: 'message', message, atMs: this.deps.now() }),
         onStatus: (status, detail) => this.dispatch({ type: 'status', status, detail, atMs: this.deps.now() }),
       },
@@ -420,12 +437,22 @@ export class RelayClient {
 
   /** Sends `value` on `channel` and tracks it: pending → acked (with the round trip) | stale | refused. */
   publish(channel: string, value: ChannelValue): PublishTicket {
+    if (this.options.resendAfterReconnect) this.kept.set(channel, value);
+    return this.send(channel, value, false);
+  }
+
+  /** The selections kept for resending (resendAfterReconnect), by channel. */
+  keptSelections(): ReadonlyMap<string, ChannelValue> {
+    return this.kept;
+  }
+
+  private send(channel: string, value: ChannelValue, isResend: boolean): PublishTicket {
     const id = this.nextId;
     this.nextId = this.nextId >= 2 ** 31 ? 1 : this.nextId + 1;
     const atMs = this.deps.now();
     const isSent = this.link.send({ type: 'publish', id, channel, value });
     const settled = new Promise<PublishTrack>((resolve) => this.waiting.set(id, resolve));
-    this.dispatch({ type: isSent ? 'sent' : 'unsent', id, channel, value, atMs });
+    this.dispatch({ type: isSent ? 'sent' : 'unsent', id, channel, value, atMs, ...(isResend ? { isResend } : {}) });
     if (isSent) this.deps.setTimer(() => this.dispatch({ type: 'publish_timeout', id }), this.options.ackTimeoutMs ?? 1000);
     return { id, channel, settled };
   }
