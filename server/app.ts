@@ -16,6 +16,7 @@ import { recordingsStore } from './features/recordings/recordings.repo';
 import { createRecordingsService } from './features/recordings/recordings.service';
 import { recordingsRouter } from './features/recordings/recordings.routes';
 import { notesRouter } from './features/notes/notes.routes';
+import { drillsRouter } from './features/drills/drills.routes';
 import type { DevInbox } from './features/mail/fake-smtp';
 import type { Mailer } from './features/mail/mailer';
 import { robotProfileRepo } from './features/season/robot-profile.repo';
@@ -109,6 +110,7 @@ export function createApp(deps: AppDeps): App {
   api.use(seasonRouter({ season, team }));
   api.use(recordingsRouter({ recordings }));
   api.use(notesRouter({ db: deps.db }));
+  api.use(drillsRouter({ db: deps.db, now }));
   api.use(recorderRouter({ recorder }));
   api.use(() => {
     throw new AppError('not_found', 'No such API route');
