@@ -28,6 +28,7 @@ export const AREAS: readonly Area[] = [
     path: '/panels',
     label: 'Panels',
     icon: 'panels',
+    isAvailable: true,
     tagline: 'Lay out the operator’s touch panel',
     description:
       'Place tiles on a grid — reef picker, level picker, station and cage pickers, pads, lamps and readouts — and bind each one to a channel the robot code reads. Every save is a version; one version is published for the driver station.',
