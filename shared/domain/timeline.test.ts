@@ -7,6 +7,7 @@ import {
   closestIndex,
   downsampleMinMax,
   followWindow,
+  liveWindow,
   formatMoment,
   indexAtOrBefore,
   nextSpeed,
@@ -173,5 +174,14 @@ describe('playback clock', () => {
     expect(next.fromS).toBeCloseTo(24);
     expect(next.toS).toBeCloseTo(34);
     expect(followWindow(w, 149, 150)).toEqual({ fromS: 140, toS: 150 });
+  });
+});
+
+describe('liveWindow', () => {
+  it('shows the last 30 s of a growing recording, or all of a shorter one', () => {
+    expect(liveWindow(95.5)).toEqual({ fromS: 65.5, toS: 95.5 });
+    expect(liveWindow(12)).toEqual({ fromS: 0, toS: 12 });
+    expect(liveWindow(0)).toEqual({ fromS: 0, toS: 0.02 });
+    expect(liveWindow(50, 10)).toEqual({ fromS: 40, toS: 50 });
   });
 });

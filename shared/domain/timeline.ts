@@ -203,3 +203,12 @@ export function followWindow(window: TimeWindow, tS: number, durationS: number):
 export function sliceBefore(series: Series, tS: number, seconds: number): { start: number; end: number } {
   return { start: lowerBound(series.tS, tS - seconds), end: indexAtOrBefore(series.tS, tS) + 1 };
 }
+
+/** Seconds of the newest telemetry the traces show while a live recording is followed. */
+export const LIVE_WINDOW_S = 30;
+
+/** The window that follows a growing recording: its last `spanS` seconds (all of it while shorter). */
+export function liveWindow(durationS: number, spanS = LIVE_WINDOW_S): TimeWindow {
+  const toS = Math.max(durationS, 0.02);
+  return { fromS: Math.max(toS - spanS, 0), toS };
+}

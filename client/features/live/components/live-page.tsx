@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { Role } from '../../../../shared/domain/roles';
+import { can, type Role } from '../../../../shared/domain/roles';
 import { Badge } from '../../../components/ui/badge';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -23,6 +23,7 @@ import { EventsList } from './events-list';
 import { LatencyCard } from './latency-card';
 import { LinkPill, LinkStatus } from './link-status';
 import { LiveField } from './live-field';
+import { RecorderCard } from './recorder-card';
 import { RobotReadouts } from './robot-readouts';
 import { SimulatorBadge } from './simulator-badge';
 import { TargetSender } from './target-sender';
@@ -89,18 +90,23 @@ export function LivePage({ memberRole, safety }: LivePageProps) {
                   <LatencyCard stats={latencyStats(state.roundTripsMs, state.roundTripCount)} />
                 </Section>
               </div>
-              <Section title="Send a target">
-                <TargetSender
-                  permission={permission}
-                  hasRobot={robot !== undefined}
-                  current={(channel) => state.channels[channel]?.value}
-                  track={(channel) => {
-                    const id = state.latestPublish[channel];
-                    return id === undefined ? undefined : state.publishes[id];
-                  }}
-                  onSend={(channel, value) => publish(channel, value)}
-                />
-              </Section>
+              <div className="flex min-w-0 flex-col gap-5">
+                <Section title="Send a target">
+                  <TargetSender
+                    permission={permission}
+                    hasRobot={robot !== undefined}
+                    current={(channel) => state.channels[channel]?.value}
+                    track={(channel) => {
+                      const id = state.latestPublish[channel];
+                      return id === undefined ? undefined : state.publishes[id];
+                    }}
+                    onSend={(channel, value) => publish(channel, value)}
+                  />
+                </Section>
+                <Section title="Recorder">
+                  <RecorderCard canRecord={can(memberRole, 'recordings.manage')} />
+                </Section>
+              </div>
             </div>
             <div className="grid items-start gap-5 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
               <Section title="On the relay" description="The team’s panels, viewers and robots, with the relay’s round trip to each.">

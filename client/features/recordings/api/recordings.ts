@@ -33,7 +33,13 @@ export const recordingsQuery = (view: RecordingView) =>
   });
 export const useRecordings = (view: RecordingView) => useQuery(recordingsQuery(view));
 
-export const recordingQuery = (id: string) => queryOptions({ queryKey: recordingKeys.one(id), queryFn: () => getRecording(id) });
+/** While a recording is still being made it is read again every second, so its replay follows it and sees it end. */
+export const recordingQuery = (id: string) =>
+  queryOptions({
+    queryKey: recordingKeys.one(id),
+    queryFn: () => getRecording(id),
+    refetchInterval: (query) => (query.state.data?.status === 'recording' ? 1000 : false),
+  });
 export const useRecording = (id: string) => useQuery(recordingQuery(id));
 
 /** PATCH one recording; the detail shows the answer at once, and the detail and every list page refetch. */

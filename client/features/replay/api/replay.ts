@@ -1,4 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useCallback } from 'react';
 import { createNoteBodySchema, noteListSchema, noteSchema, type CreateNoteBody } from '../../../../shared/schemas/note';
 import { recordingEventsSchema, recordingSignalsSchema, samplesSchema } from '../../../../shared/schemas/recording';
 import { api } from '../../../lib/api-client';
@@ -21,11 +22,16 @@ export const listNotes = (id: string) => api.get(`${base(id)}/notes`, noteListSc
 export const createNote = (id: string, body: CreateNoteBody) => api.post(`${base(id)}/notes`, createNoteBodySchema.parse(body), noteSchema);
 export const deleteNote = (id: string, noteId: string) => api.delete(`${base(id)}/notes/${encodeURIComponent(noteId)}`);
 
-// A finished recording never changes, so its samples stay fresh for the whole visit.
-export const signalsQuery = (id: string) => queryOptions({ queryKey: replayKeys.signals(id), queryFn: () => listSignals(id), staleTime: Infinity });
-export const samplesQuery = (id: string, signal: string) =>
-  queryOptions({ queryKey: replayKeys.samples(id, signal), queryFn: () => getSamples(id, signal), staleTime: Infinity });
-export const eventsQuery = (id: string) => queryOptions({ queryKey: replayKeys.events(id), queryFn: () => listEvents(id), staleTime: Infinity });
+// A finished recording never changes, so its samples stay fresh for the whole visit. A recording still being
+// made is read again every LIVE_REFETCH_MS while the page follows it.
+export const LIVE_REFETCH_MS = 1000;
+const freshness = (isLive: boolean) => (isLive ? { staleTime: 0, refetchInterval: LIVE_REFETCH_MS } : { staleTime: Infinity });
+export const signalsQuery = (id: string, isLive = false) =>
+  queryOptions({ queryKey: replayKeys.signals(id), queryFn: () => listSignals(id), ...freshness(isLive) });
+export const samplesQuery = (id: string, signal: string, isLive = false) =>
+  queryOptions({ queryKey: replayKeys.samples(id, signal), queryFn: () => getSamples(id, signal), ...freshness(isLive) });
+export const eventsQuery = (id: string, isLive = false) =>
+  queryOptions({ queryKey: replayKeys.events(id), queryFn: () => listEvents(id), ...freshness(isLive) });
 export const notesQuery = (id: string) =>
   queryOptions({
     queryKey: replayKeys.notes(id),
@@ -34,8 +40,8 @@ export const notesQuery = (id: string) =>
     retry: (count, error) => !(error instanceof ApiError && error.status === 404) && count < 2,
   });
 
-export const useSignals = (id: string) => useQuery(signalsQuery(id));
-export const useEvents = (id: string) => useQuery(eventsQuery(id));
+export const useSignals = (id: string, isLive = false) => useQuery(signalsQuery(id, isLive));
+export const useEvents = (id: string, isLive = false) => useQuery(eventsQuery(id, isLive));
 export const useNotes = (id: string) => useQuery(notesQuery(id));
 
 export function useCreateNote(id: string) {
@@ -52,4 +58,10 @@ export function useDeleteNote(id: string) {
     mutationFn: (noteId: string) => deleteNote(id, noteId),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: replayKeys.notes(id) }),
   });
+}
+
+/** Once a live recording is finished, everything read while it grew is read again, complete. */
+export function useRefreshReplay(id: string) {
+  const queryClient = useQueryClient();
+  return useCallback(() => queryClient.invalidateQueries({ queryKey: ['recordings', 'one', id], exact: false }), [queryClient, id]);
 }

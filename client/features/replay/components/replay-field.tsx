@@ -23,19 +23,23 @@ type ReplayFieldProps = {
   alliance: Alliance;
   pose: { x?: Series; y?: Series; heading?: Series };
   events: readonly RecordingEvent[];
+  /** Following a live recording: the robot's newest pose and trail from the relay, ahead of what is stored. */
+  live?: LivePose;
 };
 
+export type LivePose = { xM: number; yM: number; headingDeg: number; trail: readonly { xM: number; yM: number }[] };
+
 /** The field at the cursor: the robot, its last five seconds, the target called and the places reached. */
-export function ReplayField({ robot, alliance, pose, events }: ReplayFieldProps) {
+export function ReplayField({ robot, alliance, pose, events, live }: ReplayFieldProps) {
   const tS = useReplay((s) => s.tS);
   const targets = useMemo(() => {
     const list = branchTargets(season2025, alliance, { depthM: scoringDepthM(DEFAULT_ROBOT_PROFILE), scoringSide: DEFAULT_ROBOT_PROFILE.scoringSide }).targets;
     return new Map(list.map((t) => [t.branch, t]));
   }, [alliance]);
 
-  const xM = pose.x ? valueAt(pose.x, tS) : null;
-  const yM = pose.y ? valueAt(pose.y, tS) : null;
-  const headingDeg = (pose.heading ? valueAt(pose.heading, tS) : null) ?? 0;
+  const xM = live ? live.xM : pose.x ? valueAt(pose.x, tS) : null;
+  const yM = live ? live.yM : pose.y ? valueAt(pose.y, tS) : null;
+  const headingDeg = live ? live.headingDeg : ((pose.heading ? valueAt(pose.heading, tS) : null) ?? 0);
   const called = calledTarget(events, tS);
   const reached = placesReached(events, tS);
   const layers: FieldLayer[] = [];
@@ -45,7 +49,9 @@ export function ReplayField({ robot, alliance, pose, events }: ReplayFieldProps)
   }
   const calledPose = called ? targets.get(called.branch) : undefined;
   if (calledPose) layers.push({ kind: 'target', id: 'called', xM: calledPose.x, yM: calledPose.y, headingDeg: calledPose.headingDeg, colour: CALLED_COLOUR, label: called!.branch });
-  if (pose.x && pose.y) {
+  if (live) {
+    if (live.trail.length > 1) layers.push({ kind: 'trail', id: 'trail', points: [...live.trail], colour: TRAIL_COLOUR });
+  } else if (pose.x && pose.y) {
     const { start, end } = sliceBefore(pose.x, tS, TRAIL_S);
     const stride = Math.max(1, Math.ceil((end - start) / TRAIL_POINTS));
     const points = [];

@@ -1,5 +1,5 @@
 import { useQueries, useQuery } from '@tanstack/react-query';
-import { useEffect, useMemo, useState, type ReactNode } from 'react';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { Role } from '../../../../shared/domain/roles';
 import { adjacentMark, formatMoment, nextSpeed, parseMoment, stepTicks } from '../../../../shared/domain/timeline';
 import type { Signal } from '../../../../shared/protocol/messages';
@@ -9,10 +9,11 @@ import { Loading } from '../../../components/ui/loading';
 import { QueryError } from '../../../components/ui/query-error';
 import { Section } from '../../../components/ui/section';
 // The one component this feature takes from recordings: the details form saves with the recordings PATCH mutation.
-import { samplesQuery, useEvents, useNotes, useSignals } from '../api/replay';
-import { ReplayContext } from '../hooks/use-replay';
+import { samplesQuery, useEvents, useNotes, useRefreshReplay, useSignals } from '../api/replay';
+import { ReplayContext, useReplay } from '../hooks/use-replay';
 import { createReplayStore, type ReplayStore } from '../model/replay-store';
 import { eventMarks } from '../model/replay-view';
+import { LiveBanner, LiveReplayField } from './live-follow';
 import { NotesPanel } from './notes-panel';
 import { ReplayField } from './replay-field';
 import { TimelineBar } from './timeline-bar';
@@ -34,14 +35,36 @@ type ReplayPageProps = {
 
 /** The replay of one recording: one timeline cursor drives the traces, the field map, the values and the notes. */
 export function ReplayPage({ recording, me, initialMoment, details }: ReplayPageProps) {
-  const signals = useSignals(recording.id);
-  const events = useEvents(recording.id);
-  const [store] = useState(() => createReplayStore(recording.durationS, parseMoment(initialMoment, recording.durationS) ?? 0));
+  const isLive = recording.status === 'recording';
+  const signals = useSignals(recording.id, isLive);
+  const events = useEvents(recording.id, isLive);
+  const [store] = useState(() =>
+    createReplayStore(recording.durationS, parseMoment(initialMoment, recording.durationS) ?? 0, { isFollowing: isLive && initialMoment === null }),
+  );
   useEffect(() => () => store.dispose(), [store]);
+  useEffect(() => store.setDuration(recording.durationS), [store, recording.durationS]);
+  // A live recording that ends becomes the finished recording in place: the cursor stays, the data is read again whole.
+  const refresh = useRefreshReplay(recording.id);
+  const wasLive = useRef(isLive);
+  useEffect(() => {
+    if (wasLive.current && !isLive) {
+      store.stopFollowing();
+      void refresh();
+    }
+    wasLive.current = isLive;
+  }, [isLive, store, refresh]);
 
   if (signals.isPending || events.isPending) return <Loading label="Loading the signals and events…" />;
   if (signals.isError) return <QueryError title="Couldn’t load the signals" error={signals.error} onRetry={() => signals.refetch()} isRetrying={signals.isFetching} />;
   if (events.isError) return <QueryError title="Couldn’t load the events" error={events.error} onRetry={() => events.refetch()} isRetrying={events.isFetching} />;
+  if (isLive && (signals.data.signals.length === 0 || recording.durationS <= 0)) {
+    return (
+      <div className="flex flex-col gap-5">
+        <LiveBanner robot={recording.robot} />
+        <Loading label={`Waiting for the first telemetry from ${recording.robot}…`} />
+      </div>
+    );
+  }
   if (signals.data.signals.length === 0 || recording.durationS <= 0) {
     return (
       <EmptyState icon="recordings" title="Nothing to replay in this recording">
@@ -51,7 +74,15 @@ export function ReplayPage({ recording, me, initialMoment, details }: ReplayPage
   }
   return (
     <ReplayContext value={store}>
-      <ReplayBody recording={recording} me={me} signals={signals.data.signals} events={events.data.events} store={store} details={details} />
+      <ReplayBody
+        recording={recording}
+        isLive={isLive}
+        me={me}
+        signals={signals.data.signals}
+        events={events.data.events}
+        store={store}
+        details={details}
+      />
     </ReplayContext>
   );
 }
@@ -59,13 +90,14 @@ export function ReplayPage({ recording, me, initialMoment, details }: ReplayPage
 type ReplayBodyProps = {
   details?: ReactNode;
   recording: RecordingDetail;
+  isLive: boolean;
   me: { name: string; role: Role };
   signals: Signal[];
   events: NonNullable<ReturnType<typeof useEvents>['data']>['events'];
   store: ReplayStore;
 };
 
-function ReplayBody({ recording, me, signals, events, store, details }: ReplayBodyProps) {
+function ReplayBody({ recording, isLive, me, signals, events, store, details }: ReplayBodyProps) {
   const byName = useMemo(() => new Map(signals.map((s) => [s.name, s])), [signals]);
   const [panes, setPanes] = useState<string[][]>(() => {
     const chosen = DEFAULT_PANES.map((names) => names.filter((n) => byName.has(n)));
@@ -76,12 +108,13 @@ function ReplayBody({ recording, me, signals, events, store, details }: ReplayBo
   const marks = useMemo(() => eventMarks(events), [events]);
   const markTimes = useMemo(() => marks.map((m) => m.tS), [marks]);
   const notes = useNotes(recording.id);
-  const poseX = useQuery({ ...samplesQuery(recording.id, POSE.x), enabled: byName.has(POSE.x) });
-  const poseY = useQuery({ ...samplesQuery(recording.id, POSE.y), enabled: byName.has(POSE.y) });
-  const poseHeading = useQuery({ ...samplesQuery(recording.id, POSE.heading), enabled: byName.has(POSE.heading) });
+  const poseX = useQuery({ ...samplesQuery(recording.id, POSE.x, isLive), enabled: byName.has(POSE.x) });
+  const poseY = useQuery({ ...samplesQuery(recording.id, POSE.y, isLive), enabled: byName.has(POSE.y) });
+  const poseHeading = useQuery({ ...samplesQuery(recording.id, POSE.heading, isLive), enabled: byName.has(POSE.heading) });
+  const isFollowing = useReplay((s) => s.isFollowing);
 
   const valueNames = [...new Set([...FIXED_VALUES.filter((n) => byName.has(n)), ...panes.flat()])];
-  const valueQueries = useSamplesOf(recording.id, valueNames);
+  const valueQueries = useSamplesOf(recording.id, valueNames, isLive);
 
   const step = (ticks: number) => {
     store.pause();
@@ -148,6 +181,7 @@ function ReplayBody({ recording, me, signals, events, store, details }: ReplayBo
   let colourOffset = 0;
   return (
     <div className="flex flex-col gap-5">
+      {isLive && <LiveBanner robot={recording.robot} />}
       <Section title="Timeline" className="p-4">
         <TimelineBar
           marks={marks}
@@ -180,6 +214,7 @@ function ReplayBody({ recording, me, signals, events, store, details }: ReplayBo
                   key={i}
                   index={i}
                   recordingId={recording.id}
+                  isLive={isLive}
                   signals={paneSignals}
                   allSignals={signals}
                   colourOffset={offset}
@@ -191,12 +226,21 @@ function ReplayBody({ recording, me, signals, events, store, details }: ReplayBo
         </Section>
         <div className="flex flex-col gap-5">
           <Section title="Field map" className="p-4">
-            <ReplayField
-              robot={recording.robot}
-              alliance={recording.metadata.alliance ?? 'blue'}
-              pose={{ x: poseX.data, y: poseY.data, heading: poseHeading.data }}
-              events={events}
-            />
+            {isLive && isFollowing ? (
+              <LiveReplayField
+                robot={recording.robot}
+                alliance={recording.metadata.alliance ?? 'blue'}
+                pose={{ x: poseX.data, y: poseY.data, heading: poseHeading.data }}
+                events={events}
+              />
+            ) : (
+              <ReplayField
+                robot={recording.robot}
+                alliance={recording.metadata.alliance ?? 'blue'}
+                pose={{ x: poseX.data, y: poseY.data, heading: poseHeading.data }}
+                events={events}
+              />
+            )}
           </Section>
           <Section title="Values at cursor" className="p-4">
             <ValuesTable
@@ -218,6 +262,6 @@ function ReplayBody({ recording, me, signals, events, store, details }: ReplayBo
 }
 
 /** The samples of several signals, undefined until each arrives. */
-function useSamplesOf(recordingId: string, names: readonly string[]) {
-  return useQueries({ queries: names.map((n) => samplesQuery(recordingId, n)), combine: (results) => results.map((r) => r.data) });
+function useSamplesOf(recordingId: string, names: readonly string[], isLive: boolean) {
+  return useQueries({ queries: names.map((n) => samplesQuery(recordingId, n, isLive)), combine: (results) => results.map((r) => r.data) });
 }

@@ -27,6 +27,7 @@ export function TimelineBar({ marks, notes, onStep, onJump, onCopyLink }: Timeli
   const store = useReplayStore();
   const isPlaying = useReplay((s) => s.isPlaying);
   const speed = useReplay((s) => s.speed);
+  const durationS = useReplay((s) => s.durationS);
   const [copy, setCopy] = useState<'idle' | 'copied' | 'failed'>('idle');
   useEffect(() => {
     if (copy === 'idle') return;
@@ -55,7 +56,7 @@ export function TimelineBar({ marks, notes, onStep, onJump, onCopyLink }: Timeli
             <Glyph d="M18 5v14M6 5l9 7-9 7z" />
           </Button>
         </div>
-        <CursorReadout durationS={store.durationS} />
+        <CursorReadout durationS={durationS} />
         <label className="flex items-center gap-2 text-sm text-asphalt-300">
           Speed
           <select
@@ -135,7 +136,7 @@ function ScrubBar({ marks, notes }: { marks: readonly EventMark[]; notes: readon
   const thumbRef = useRef<HTMLDivElement>(null);
   const windowRef = useRef<HTMLDivElement>(null);
   const lastRef = useRef<HTMLParagraphElement>(null);
-  const durationS = store.durationS || 1;
+  const durationS = useReplay((s) => s.durationS) || 1;
   const pct = (tS: number) => `${(Math.min(Math.max(tS / durationS, 0), 1) * 100).toFixed(3)}%`;
 
   // The thumb, the window band and the "last event" line follow the cursor without re-rendering the bar.

@@ -15,6 +15,8 @@ const HEIGHT_PX = 168;
 
 type TracePaneProps = {
   recordingId: string;
+  /** The recording is still being made: its samples are read again as it grows. */
+  isLive: boolean;
   index: number;
   signals: readonly Signal[];
   allSignals: readonly Signal[];
@@ -23,9 +25,9 @@ type TracePaneProps = {
 };
 
 /** One uPlot chart of a few signals over the visible window, with the timeline cursor as a vertical line. */
-export function TracePane({ recordingId, index, signals, allSignals, colourOffset, onChange }: TracePaneProps) {
+export function TracePane({ recordingId, isLive, index, signals, allSignals, colourOffset, onChange }: TracePaneProps) {
   const store = useReplayStore();
-  const queries = useQueries({ queries: signals.map((s) => samplesQuery(recordingId, s.name)) });
+  const queries = useQueries({ queries: signals.map((s) => samplesQuery(recordingId, s.name, isLive)) });
   const isLoading = queries.some((q) => q.isPending);
   const failed = queries.find((q) => q.isError);
   const stamp = queries.map((q) => q.dataUpdatedAt).join('|');
