@@ -3,3 +3,4 @@ export * from './robot';
 export * from './recordings';
 export * from './notes';
 export * from './panels';
+export * from './cycles';
