@@ -18,6 +18,9 @@ const router = createBrowserRouter([
         ],
       },
       { path: 'dev/inbox', lazy: () => import('./routes/dev-inbox') },
+      // Run mode is full screen, outside the app frame.
+      { path: 'run', lazy: () => import('./routes/run') },
+      { path: 'panels/:id/run', lazy: () => import('./routes/run').then((m) => ({ Component: m.PanelRunComponent })) },
       {
         path: '/',
         lazy: () => import('./routes/app-frame'),
