@@ -4,3 +4,4 @@ export * from './recordings';
 export * from './notes';
 export * from './panels';
 export * from './cycles';
+export * from './drills';
