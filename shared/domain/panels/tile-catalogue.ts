@@ -112,7 +112,8 @@ export const TILE_CATALOGUE: { [K in TileKind]: TileCatalogueEntry<K> } = {
   'reef-picker': entry('reef-picker', {
     label: 'Reef picker',
     description: 'The reef as the operator sees it; tap one of the 12 branches (A–L).',
-    defaultSize: { w: 4, h: 4 },
+    // 5 × 5 cells of the starter grid's 80 px give branch buttons over 44 px; 4 × 4 would not (touch-targets.ts).
+    defaultSize: { w: 5, h: 5 },
     minSize: { w: 3, h: 3 },
     fill: 'surface',
     ink: 'text',
