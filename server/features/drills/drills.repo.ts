@@ -6,7 +6,7 @@ import type { Role } from '../../../shared/domain/roles';
 import type { Drill, DrillResult, DrillResultDetail, DrillRunMode } from '../../../shared/schemas/drill';
 import type { Db } from '../../db/client';
 import type { Executor } from '../../db/executor';
-import { drillResultCalls, drillResults, drills } from '../../db/schema/drills';
+import { drillResultCalls, drillResults, drills } from '../../db/schema/index';
 
 type DrillRow = typeof drills.$inferSelect;
 type ResultRow = typeof drillResults.$inferSelect;
