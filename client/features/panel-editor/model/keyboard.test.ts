@@ -23,10 +23,13 @@ describe('keyIntent', () => {
     expect(key(k, mods)).toEqual(intent);
   });
 
-  it.each([['d'], ['z'], ['ArrowLeft', { ctrlKey: true }], ['x', { ctrlKey: true }], ['z', { ctrlKey: true, altKey: true }]] as const)(
-    '%s with %o is not the designer’s',
-    (k, mods = {}) => {
-      expect(key(k, mods)).toBeNull();
-    },
-  );
+  it.each([
+    ['d', {}],
+    ['z', {}],
+    ['ArrowLeft', { ctrlKey: true }],
+    ['x', { ctrlKey: true }],
+    ['z', { ctrlKey: true, altKey: true }],
+  ])('%s with %o is not the designer’s', (k, mods) => {
+    expect(key(k, mods)).toBeNull();
+  });
 });
