@@ -1,13 +1,14 @@
 import type { Db } from '../../db/client';
 import { authStore } from '../auth/auth.repo';
 import { hashPassword } from '../auth/passwords';
+import { seedDemoPanels } from './demo-panel-seed';
 import { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_TEAM } from './demo-team';
 
 /** Adds whatever of the demo team is missing; running it again changes nothing. */
 export async function seedDemo(db: Db): Promise<{ created: number }> {
   const store = authStore(db);
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  return store.transaction(async (repo) => {
+  const seeded = await store.transaction(async (repo) => {
     let created = 0;
     let teamId = (await repo.findTeamByNumber(DEMO_TEAM.number))?.id;
     if (!teamId) {
@@ -22,4 +23,5 @@ export async function seedDemo(db: Db): Promise<{ created: number }> {
     }
     return { created };
   });
+  return { created: seeded.created + (await seedDemoPanels(db)).created };
 }
