@@ -10,7 +10,7 @@ import type { Page, PanelDocument, Theme, ThemeColour, Tile } from '../../schema
 import type { SeasonProfile } from '../season/season-profile';
 import { contrastRatio, formatContrastRatio, TEXT_CONTRAST_MINIMUM } from './contrast';
 import { cellRectsOverlap, deviceSize } from './grid';
-import { kindNeedsChannel, TILE_CATALOGUE, tileDisplayName, tileReads, tileWrites, type ChannelUse } from './tile-catalogue';
+import { kindNeedsChannel, THEME_COLOUR_NAMES, TILE_CATALOGUE, tileDisplayName, tileReads, tileWrites, type ChannelUse } from './tile-catalogue';
 import { tileTouchTargets } from './touch-targets';
 
 export type PanelIssueRule = 'target-below-44' | 'target-below-24' | 'low-contrast' | 'overlap' | 'no-channel' | 'type-clash' | 'robot-does-not-read';
@@ -45,17 +45,6 @@ export const BUTTON_TEXT_PAIRS: readonly { ink: ThemeColour; fill: ThemeColour; 
   { ink: 'accentText', fill: 'accent', state: 'chosen' },
 ];
 
-const THEME_NAMES: Record<ThemeColour, string> = {
-  canvas: 'Canvas',
-  surface: 'Surface',
-  text: 'Text',
-  accent: 'Accent',
-  accentText: 'Accent text',
-  ok: 'OK',
-  warn: 'Warn',
-  danger: 'Danger',
-  muted: 'Muted',
-};
 
 const SEVERITY_ORDER = { error: 0, warning: 1 } as const;
 
@@ -135,7 +124,7 @@ function contrastIssues(theme: Theme, page: Page): PanelIssue[] {
       severity: 'warning',
       pageId: page.id,
       tileIds: [tile.id],
-      message: `${describeTile(tile)}: its text (${THEME_NAMES[tile.ink]} on ${THEME_NAMES[tile.fill]}) has a contrast of ${formatContrastRatio(ratio)}; text needs at least 4.5:1 (WCAG 1.4.3).`,
+      message: `${describeTile(tile)}: its text (${THEME_COLOUR_NAMES[tile.ink]} on ${THEME_COLOUR_NAMES[tile.fill]}) has a contrast of ${formatContrastRatio(ratio)}; text needs at least 4.5:1 (WCAG 1.4.3).`,
     });
   }
   const buttonTiles = page.tiles.filter((t) => tileWrites(t).length > 0 && t.kind !== 'reef-picker');
@@ -149,7 +138,7 @@ function contrastIssues(theme: Theme, page: Page): PanelIssue[] {
         severity: 'warning',
         pageId: page.id,
         tileIds: buttonTiles.map((t) => t.id),
-        message: `Buttons ${pair.state === 'idle' ? 'not chosen' : 'chosen'} draw ${THEME_NAMES[pair.ink]} on ${THEME_NAMES[pair.fill]} at ${formatContrastRatio(ratio)}; text needs at least 4.5:1 (WCAG 1.4.3). Change the theme's ${THEME_NAMES[pair.ink]} or ${THEME_NAMES[pair.fill]} colour.`,
+        message: `Buttons ${pair.state === 'idle' ? 'not chosen' : 'chosen'} draw ${THEME_COLOUR_NAMES[pair.ink]} on ${THEME_COLOUR_NAMES[pair.fill]} at ${formatContrastRatio(ratio)}; text needs at least 4.5:1 (WCAG 1.4.3). Change the theme's ${THEME_COLOUR_NAMES[pair.ink]} or ${THEME_COLOUR_NAMES[pair.fill]} colour.`,
       });
     }
   }

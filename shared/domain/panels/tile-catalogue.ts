@@ -44,6 +44,19 @@ export const DEFAULT_PANEL_THEME: Theme = {
   muted: '#8893a0',
 };
 
+/** Theme colour names as the designer shows them. */
+export const THEME_COLOUR_NAMES: Record<ThemeColour, string> = {
+  canvas: 'Canvas',
+  surface: 'Surface',
+  text: 'Text',
+  accent: 'Accent',
+  accentText: 'Accent text',
+  ok: 'OK',
+  warn: 'Warn',
+  danger: 'Danger',
+  muted: 'Muted',
+};
+
 /** The default channel of each writing or reading kind. */
 export const DEFAULT_CHANNELS = {
   'reef-picker': 'op/reef/branch',
