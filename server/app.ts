@@ -16,7 +16,7 @@ import { recordingsStore } from './features/recordings/recordings.repo';
 import { createRecordingsService } from './features/recordings/recordings.service';
 import { recordingsRouter } from './features/recordings/recordings.routes';
 import { notesRouter } from './features/notes/notes.routes';
-import { panelsRouter } from './features/panels/panels.routes';
+import { PANEL_BODY_LIMIT, panelsRouter } from './features/panels/panels.routes';
 import { drillsRouter } from './features/drills/drills.routes';
 import type { DevInbox } from './features/mail/fake-smtp';
 import type { Mailer } from './features/mail/mailer';
@@ -101,6 +101,8 @@ export function createApp(deps: AppDeps): App {
 
   const api = express.Router();
   api.use(markRequestStart);
+  // Before the general parser: a panel document may hold 8 pages of 200 tiles (about 3.1 MB at most).
+  api.use('/panels', express.json({ limit: PANEL_BODY_LIMIT }));
   api.use(express.json({ limit: '256kb' }));
   api.use(cookieParser());
   api.use(checkCsrf);

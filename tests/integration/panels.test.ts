@@ -240,10 +240,51 @@ describe('versions and saving', () => {
     doc.grid = { columns: 20, rows: 10, gapPx: 4 };
     const readout = DEMO_MATCH_PANEL.pages[0]!.tiles.find((t) => t.kind === 'readout')!;
     doc.pages[0]!.tiles = Array.from({ length: 200 }, (_, i): Tile => ({ ...readout, id: `readout-${i}`, label: `Readout number ${i}`, x: i % 20, y: Math.floor(i / 20), w: 1, h: 1 }));
-    const bytes = Buffer.byteLength(JSON.stringify({ name: 'Two hundred', document: doc }));
-    expect(bytes).toBeGreaterThan(40_000);
     const panel = await createPanel(clients.programmer, 'Two hundred', doc);
     expect(panel.tileCount).toBe(200);
+  });
+
+  /** The largest document the schema allows: `pageCount` pages of 200 choice pads with every text at its longest. */
+  function largestDocument(pageCount: number): PanelDocument {
+    const doc = copy(DEMO_MATCH_PANEL);
+    doc.grid = { columns: 48, rows: 48, gapPx: 0 };
+    doc.pages = Array.from({ length: pageCount }, (_, p) => ({
+      id: `${'p'.repeat(63)}${p}`,
+      name: 'N'.repeat(40),
+      tiles: Array.from({ length: 200 }, (_, i): Tile => ({
+        id: `${p}-${String(i).padStart(3, '0')}`.padEnd(64, 'x'),
+        kind: 'choice-pad',
+        x: i % 48,
+        y: Math.floor(i / 48),
+        w: 1,
+        h: 1,
+        label: 'L'.repeat(80),
+        fill: 'surface',
+        ink: 'text',
+        channel: `op/${'c'.repeat(125)}`,
+        options: Array.from({ length: 12 }, (_, k) => ({ label: 'O'.repeat(40), value: String(k).padEnd(64, 'v') })),
+      })),
+    }));
+    return doc;
+  }
+
+  it('takes 200 tiles at their longest, past the general 256 kB limit, and the largest document the schema allows', async () => {
+    const page = largestDocument(1);
+    expect(Buffer.byteLength(JSON.stringify(page))).toBeGreaterThan(256 * 1024);
+    expect((await createPanel(clients.programmer, 'Long texts', page)).tileCount).toBe(200);
+
+    const whole = largestDocument(8);
+    const file = { format: 'pitwall.panel', version: 1, name: 'Largest', exportedAt: '2025-03-14T15:00:00Z', document: whole };
+    expect(Buffer.byteLength(JSON.stringify(file))).toBeGreaterThan(3_000_000);
+    const res = await clients.programmer.post('/api/panels/import').send(file).expect(201);
+    expect(res.body.tileCount).toBe(1600);
+  });
+
+  it('answers 413 to a body over the panels limit and stores nothing', async () => {
+    const before = await counts();
+    const res = await clients.programmer.post('/api/panels/import').set('Content-Type', 'application/json').send(`{"name":"${'x'.repeat(4 * 1024 * 1024)}"}`).expect(413);
+    expect(res.body.error.code).toBe('payload_too_large');
+    expect(await counts()).toEqual(before);
   });
 });
 

@@ -21,6 +21,12 @@ import { AppError, errorBody, zodIssues } from '../../lib/errors';
 import { actorOf, requireAction } from '../auth/session.middleware';
 import { PanelConflictError, panelsServiceFor, type PanelsService } from './panels.service';
 
+/**
+ * The JSON body limit of the panels routes (app.ts mounts a parser with it before the general 256 kB one):
+ * the largest document the schema allows (8 pages × 200 tiles, every text at its longest) is about 3.1 MB.
+ */
+export const PANEL_BODY_LIMIT = '4mb';
+
 const versionParamsSchema = panelParamsSchema.extend({ versionId: z.string().uuid({ message: 'Not a version id' }) });
 
 /**
