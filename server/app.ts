@@ -16,6 +16,8 @@ import { recordingsStore } from './features/recordings/recordings.repo';
 import { createRecordingsService } from './features/recordings/recordings.service';
 import { recordingsRouter } from './features/recordings/recordings.routes';
 import { notesRouter } from './features/notes/notes.routes';
+import { cyclesRouter } from './features/cycles/cycles.routes';
+import { storeCyclesOnFinish } from './features/cycles/cycles.service';
 import { PANEL_BODY_LIMIT, panelsRouter } from './features/panels/panels.routes';
 import { drillsRouter } from './features/drills/drills.routes';
 import type { DevInbox } from './features/mail/fake-smtp';
@@ -84,7 +86,7 @@ export function createApp(deps: AppDeps): App {
     ...common,
     onRobotKeyRevoked: (keyId) => relay?.disconnectKey(keyId),
   });
-  const recordings = createRecordingsService({ store: recordingsStore(deps.db), now });
+  const recordings = createRecordingsService({ store: recordingsStore(deps.db), now, onFinished: storeCyclesOnFinish(deps.db, { now, logger: deps.logger }) });
   const recorder = createRecorder({ recordings, repo: recorderRepo(deps.db), logger: deps.logger, ...deps.recorder });
   relay = createRelay({
     ...relayAuthenticators({ tokens, auth, team }),
@@ -113,6 +115,7 @@ export function createApp(deps: AppDeps): App {
   api.use(seasonRouter({ season, team }));
   api.use(recordingsRouter({ recordings }));
   api.use(notesRouter({ db: deps.db }));
+  api.use(cyclesRouter({ db: deps.db, now }));
   api.use(panelsRouter({ db: deps.db, now }));
   api.use(drillsRouter({ db: deps.db, now }));
   api.use(recorderRouter({ recorder }));

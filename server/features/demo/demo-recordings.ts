@@ -11,6 +11,7 @@ import { authStore } from '../auth/auth.repo';
 import { recorderRepo } from '../recorder/recorder.repo';
 import { recordingsStore } from '../recordings/recordings.repo';
 import { createRecordingsService } from '../recordings/recordings.service';
+import { storeCyclesOnFinish } from '../cycles/cycles.service';
 import { DEMO_MEMBERS, DEMO_TEAM } from './demo-team';
 
 export const DEMO_EVENT = 'Lakeshore District Event';
@@ -48,7 +49,7 @@ export async function seedDemoRecordings(db: Db, matches: readonly DemoMatch[] =
   const team = await authStore(db).findTeamByNumber(DEMO_TEAM.number);
   if (!team) throw new Error('the demo team is missing: seed it first');
   let clock = new Date();
-  const recordings = createRecordingsService({ store: recordingsStore(db), now: () => clock });
+  const recordings = createRecordingsService({ store: recordingsStore(db), now: () => clock, onFinished: storeCyclesOnFinish(db) });
   const extra = recorderRepo(db);
   let created = 0;
   for (const m of matches) {

@@ -43,6 +43,8 @@ export interface IngestResult {
 export interface RecordingsServiceDeps {
   store: RecordingsStore;
   now: () => Date;
+  /** Called once a recording is finished (live end, upload, seed), e.g. to store its cycles. */
+  onFinished?: (teamId: string, recordingId: string) => Promise<void>;
 }
 
 export class IngestError extends Error {}
@@ -58,7 +60,7 @@ const finiteOrNull = (v: number) => (Number.isFinite(v) ? v : null);
 const fileStem = (row: RecordingRow) =>
   `${row.robot.replace(/[^A-Za-z0-9_-]+/g, '-') || 'recording'}-${row.startedAt.toISOString().slice(0, 10)}-${row.id.slice(0, 8)}`;
 
-export function createRecordingsService({ store, now }: RecordingsServiceDeps) {
+export function createRecordingsService({ store, now, onFinished }: RecordingsServiceDeps) {
   async function recordingOrThrow(teamId: string, id: string): Promise<RecordingRow> {
     const row = await store.find(teamId, id);
     if (!row) throw notFound('That recording');
@@ -118,7 +120,7 @@ export function createRecordingsService({ store, now }: RecordingsServiceDeps) {
         throw error;
       }
       const startedAt = plan.startedAtMs === undefined ? now() : new Date(plan.startedAtMs + plan.originTMs);
-      return store.transaction(async (repo) => {
+      const stored = await store.transaction(async (repo) => {
         const recording = await repo.insertRecording({
           teamId: actor.team.id,
           robot: plan.robot ?? 'Unnamed robot',
@@ -138,6 +140,8 @@ export function createRecordingsService({ store, now }: RecordingsServiceDeps) {
         await repo.insertEvents(recording.id, plan.events);
         return { id: recording.id };
       });
+      await onFinished?.(actor.team.id, stored.id);
+      return stored;
     },
 
     /** The recording as a Pitwall recording file or as long-form CSV (time_s,signal,value), produced piece by piece. */
@@ -266,6 +270,7 @@ export function createRecordingsService({ store, now }: RecordingsServiceDeps) {
       await recordingOrThrow(teamId, recordingId);
       await store.finish(recordingId, now());
       await this.compact(recordingId);
+      await onFinished?.(teamId, recordingId);
       return recordingOrThrow(teamId, recordingId);
     },
 
