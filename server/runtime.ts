@@ -118,6 +118,8 @@ export async function startServer({ env, logger, databaseUrl, seed }: StartOptio
     clientDir: CLIENT_DIST,
   });
   server.on('request', app.express);
+  // Robots are let in once the recordings a previous run left unfinished are taken up again.
+  await app.services.recorder.resumeUnfinished();
   server.on('upgrade', (req, socket, head) => app.relay.handleUpgrade(req, socket, head));
   const dataDir = path.resolve(PROJECT_ROOT, env.PITWALL_DATA_DIR);
   const simulatorKeyFile = seed ? path.join(dataDir, 'simulator-key') : undefined;

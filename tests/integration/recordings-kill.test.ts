@@ -2,7 +2,9 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { like } from 'drizzle-orm';
 import { afterAll, beforeAll, expect, it } from 'vitest';
+import { recordings } from '../../server/db/schema/index';
 import { freePort } from '../../server/db/embedded-postgres';
 import { DEMO_TEAM } from '../../server/features/demo/demo-team';
 import { SIMULATOR_KEY_NAME } from '../../server/features/demo/simulator-key';
@@ -29,8 +31,9 @@ const sends: Send[] = [
 ].sort((a, b) => a.seq - b.seq);
 
 /** Starts the server process; resolves with the demo robot key once it listens. */
-function startServer(stallAtSeq?: number): Promise<string> {
+function startServer(stallAtSeq?: number, options: { recorder?: boolean } = {}): Promise<string> {
   const stall = stallAtSeq === undefined ? {} : { PITWALL_TEST_STALL_AT_SEQ: String(stallAtSeq) };
+  if (options.recorder) Object.assign(stall, { PITWALL_TEST_RECORDER: '1' });
   const proc = spawn(process.execPath, ['--import', 'tsx', 'tests/support/recording-server.ts'], {
     env: { ...process.env, DATABASE_URL: db.url, PORT: String(port), PITWALL_DATA_DIR: dataDir, ...stall },
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -136,4 +139,49 @@ it('keeps every seq of a match exactly once across a server killed mid-stream', 
     const sent = Uint32Array.from(rows, (row) => new Uint32Array(row.buffer, row.byteOffset, row.length)[index]!);
     expect(new Uint32Array(samples.values.buffer, samples.values.byteOffset, samples.values.length)).toEqual(sent);
   }
+});
+
+it('continues the same live recording when the server with the recorder is killed in the middle of a match', { timeout: 90_000 }, async () => {
+  robot?.stop();
+  if (child && child.exitCode === null && child.signalCode === null) await killServer();
+  const key = await startServer(undefined, { recorder: true });
+  const service = createRecordingsService({ store: recordingsStore(db.db), now: () => new Date() });
+  const team = (await authStore(db.db).findTeamByNumber(DEMO_TEAM.number))!;
+  const r = new RobotClient({ url: `ws://127.0.0.1:${port}/relay`, key, name: DEMO_TEAM.robot });
+  robot = r;
+  r.start();
+  await until(() => r.status === 'open', 'the robot to connect');
+  r.declareSignals(match.signals);
+  const ofThisStream = () => db.db.select().from(recordings).where(like(recordings.streamId, `${r.streamId}:%`));
+
+  // Into teleop (the mode events start the recording), then the server dies without warning.
+  const half = Math.floor(sends.length / 2);
+  await sendPaced(r, sends.slice(0, half));
+  await until(() => r.storedUpTo >= sends[half - 1]!.seq, 'the first half to be stored');
+  const before = await ofThisStream();
+  expect(before.map((x) => [x.kind, x.status, x.source])).toEqual([['match', 'recording', 'live']]);
+  await killServer();
+  for (const s of sends.slice(half, half + 200)) s.send(r);
+
+  // The next life takes the unfinished recording up again; the robot resends and plays to the end.
+  await startServer(undefined, { recorder: true });
+  await until(() => r.storedUpTo >= sends[half + 199]!.seq, 'the resent messages to be stored');
+  await sendPaced(r, sends.slice(half + 200));
+  await until(() => r.storedUpTo >= sends.at(-1)!.seq, 'the whole match to be stored');
+  const deadline = Date.now() + 10_000;
+  let after = await ofThisStream();
+  while (after[0]?.status !== 'finished' && Date.now() < deadline) {
+    await new Promise((done) => setTimeout(done, 50));
+    after = await ofThisStream();
+  }
+
+  // One recording, finished, from its first seq to the end of the match's tail with nothing missing or doubled.
+  expect(after).toHaveLength(1);
+  expect(after[0]).toMatchObject({ id: before[0]!.id, status: 'finished', kind: 'match', source: 'live' });
+  const seqs = await service.listStoredSeqs(after[0]!.id);
+  const fromSeq = Number(after[0]!.streamId!.split(':').at(-1));
+  const tailEnd = match.batches.find((b) => b.t0Ms >= 150_000 + 500)!.seq;
+  expect(seqs).toEqual(sends.map((s) => s.seq).filter((seq) => seq >= fromSeq && seq < tailEnd));
+  const modes = (await service.listEvents(team.id, after[0]!.id)).filter((e) => e.kind === 'mode_changed').map((e) => e.data?.to);
+  expect(modes).toEqual(['auto', 'teleop', 'disabled']);
 });

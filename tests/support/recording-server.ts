@@ -2,6 +2,8 @@
 // kill it with SIGKILL mid-stream. Env: DATABASE_URL (migrated), PORT, PITWALL_DATA_DIR (the simulator key
 // file goes there), PITWALL_TEST_STALL_AT_SEQ optional: once a message with that seq or later is stored, the
 // store never returns, so the relay never confirms it (stored in the database, unknown to the robot).
+// PITWALL_TEST_RECORDER=1: the app's own recorder instead (one recording per match from the robot's mode),
+// taking up the recordings an earlier life left unfinished before robots are let in, as npm start does.
 // Prints `ready <robot key>` once it listens.
 import http from 'node:http';
 import path from 'node:path';
@@ -31,14 +33,16 @@ const telemetryStore: TelemetryStore = {
   },
 };
 const url = `http://127.0.0.1:${PORT}`;
+const useRecorder = process.env.PITWALL_TEST_RECORDER === '1';
 const app = createApp({
   db: handle.db,
   logger,
   mailer: { send: async () => {} },
   tokenSecret: 'test-secret-that-is-long-enough-for-hs256-signing',
   publicUrl: url,
-  telemetryStore,
+  ...(useRecorder ? {} : { telemetryStore }),
 });
+if (useRecorder) await app.services.recorder.resumeUnfinished();
 const key = await ensureSimulatorKey(handle.db, app.services.team, path.join(PITWALL_DATA_DIR, 'simulator-key'));
 const server = http.createServer(app.express);
 server.on('upgrade', (req, socket, head) => app.relay.handleUpgrade(req, socket, head));

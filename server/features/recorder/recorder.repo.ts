@@ -1,7 +1,7 @@
 import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { ChannelValue } from '../../../shared/protocol/messages';
 import type { Executor } from '../../db/executor';
-import { recordingEvents, recordings } from '../../db/schema/index';
+import { recordingEvents, recordings, recordingStreamSeqs } from '../../db/schema/index';
 
 /**
  * Events the relay adds itself (operator selections, robot acks) have no robot seq: they are numbered from
@@ -35,6 +35,27 @@ export function recorderRepo(db: Executor) {
                     ${sql.param(events.map((e) => JSON.stringify(e.data)))}::jsonb[]) with ordinality as e(t_ms, kind, data, n)`);
     },
 
+    /** Live recordings still being made, as a server that stopped mid-match left them, with their newest stored seq. */
+    async listUnfinishedLive(): Promise<UnfinishedRecording[]> {
+      const rows = await db
+        .select({
+          id: recordings.id,
+          teamId: recordings.teamId,
+          robot: recordings.robot,
+          streamKey: recordings.streamId,
+          kind: recordings.kind,
+          maxSeq: sql<number | null>`(select max(${recordingStreamSeqs.seq}) from ${recordingStreamSeqs} where ${recordingStreamSeqs.recordingId} = ${recordings.id})`,
+          lastMode: sql<string | null>`(select ${recordingEvents.data}->>'to' from ${recordingEvents}
+            where ${recordingEvents.recordingId} = ${recordings.id} and ${recordingEvents.kind} = 'mode_changed'
+            order by ${recordingEvents.seq} desc limit 1)`,
+          sawTeleop: sql<boolean>`exists(select 1 from ${recordingEvents} where ${recordingEvents.recordingId} = ${recordings.id}
+            and ${recordingEvents.kind} = 'mode_changed' and ${recordingEvents.data}->>'to' = 'teleop')`,
+        })
+        .from(recordings)
+        .where(and(eq(recordings.status, 'recording'), eq(recordings.source, 'live')));
+      return rows.flatMap((r) => (r.streamKey ? [{ ...r, streamKey: r.streamKey, maxSeq: r.maxSeq === null ? null : Number(r.maxSeq) }] : []));
+    },
+
     /** Deletes the team's finished live simulated recordings beyond the newest `keep`; returns how many. */
     async trimLiveSimulated(teamId: string, keep: number): Promise<number> {
       const rows = await db
@@ -56,3 +77,16 @@ export function recorderRepo(db: Executor) {
 }
 
 export type RecorderRepo = ReturnType<typeof recorderRepo>;
+
+export interface UnfinishedRecording {
+  id: string;
+  teamId: string;
+  robot: string;
+  /** `<streamId>:<fromSeq>`, as the recorder keyed it. */
+  streamKey: string;
+  kind: typeof recordings.$inferSelect.kind;
+  maxSeq: number | null;
+  /** The mode of the newest stored `mode_changed` event, if any. */
+  lastMode: string | null;
+  sawTeleop: boolean;
+}

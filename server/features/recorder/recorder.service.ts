@@ -331,6 +331,46 @@ export function createRecorder(options: RecorderOptions) {
       return [...byRobot.values()].sort((a, b) => a.robot.localeCompare(b.robot));
     },
 
+    /**
+     * After a restart: takes up the live recordings the last run left unfinished, so a robot that reconnects
+     * with the same stream (and resends what was never confirmed) continues its recording instead of starting
+     * a new one. A robot that does not come back within the grace has its recording finished. Call before the
+     * relay accepts robots.
+     */
+    async resumeUnfinished(): Promise<number> {
+      const unfinished = await repo.listUnfinishedLive();
+      for (const row of unfinished) {
+        const cut = row.streamKey.lastIndexOf(':');
+        const fromSeq = Number(row.streamKey.slice(cut + 1));
+        if (cut <= 0 || !Number.isInteger(fromSeq)) continue;
+        const state = stateOf({ teamId: row.teamId, keyId: undefined, robot: row.robot, streamId: row.streamKey.slice(0, cut), signals: undefined });
+        if (openSegment(state)) continue;
+        const segment: Segment = {
+          key: row.streamKey,
+          fromSeq,
+          toSeq: undefined,
+          kind: row.kind,
+          manual: false,
+          sawTeleop: row.sawTeleop,
+          closeAtRobotMs: undefined,
+          recordingId: row.id,
+          relayEvents: [],
+          finished: false,
+        };
+        state.segments.push(segment);
+        state.maxSeq = Math.max(state.maxSeq, row.maxSeq ?? fromSeq - 1);
+        if (row.lastMode !== null && isMode(row.lastMode)) state.mode = row.lastMode;
+        segmentsByKey.set(`${row.teamId}/${segment.key}`, { stream: state, segment });
+        state.graceTimer = setTimeout(() => {
+          state.graceTimer = undefined;
+          if (state.connections === 0 && openSegment(state) === segment) end(state, segment, state.maxSeq + 1, true);
+        }, graceMs);
+        state.graceTimer.unref?.();
+        logger.info({ robot: row.robot, recordingId: row.id, fromSeq, maxSeq: row.maxSeq }, 'recorder: resuming an unfinished recording');
+      }
+      return unfinished.length;
+    },
+
     /** Resolves once every stream's queued storage work is done (shutdown, tests). */
     async settle(): Promise<void> {
       await Promise.all([...streams.values()].map((x) => x.chain));
