@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
+import { DEMO_DRILLS, seedDemoDrills } from '../../server/features/demo/demo-drills';
 import { seedDemo } from '../../server/features/demo/seed';
 import { MemoryTelemetryStore } from '../../server/relay/telemetry-store';
 import { DRILL_ANSWER_CHANNEL, DRILL_CALL_CHANNEL, drillAnswerValueSchema, drillCallValueSchema, type DrillCallValue } from '../../shared/domain/drills/drill-channels';
@@ -120,5 +121,26 @@ describe('drill calls over the relay', () => {
       await new Promise((r) => setTimeout(r, 10));
     }
     robot.stop();
+  });
+});
+
+describe('the demo drill sessions', () => {
+  it('gives the demo drills and a few weeks of plausible sessions, once', async () => {
+    const coach = await server.client();
+    await coach.post('/api/auth/sign-in').send({ email: 'coach@harborlight.example', password: DEMO_PASSWORD }).expect(200);
+    const drills = (await coach.get('/api/drills').expect(200)).body.drills as { name: string; resultCount: number }[];
+    expect(drills.map((d) => d.name).sort()).toEqual(DEMO_DRILLS.map((d) => d.name).sort());
+    const results = (await coach.get('/api/drills/results').expect(200)).body.results as { operator: { name: string }; stats: { medianMs: number; accuracy: number } }[];
+    expect(results.length).toBeGreaterThanOrEqual(10);
+    expect(new Set(results.map((r) => r.operator.name))).toEqual(new Set(['Tomas Reyes', 'Priya Dunmore']));
+    for (const r of results) {
+      expect(r.stats.medianMs).toBeGreaterThan(500);
+      expect(r.stats.medianMs).toBeLessThan(3000);
+      expect(r.stats.accuracy).toBeGreaterThan(0.5);
+    }
+    const bests = (await coach.get('/api/drills/bests').expect(200)).body.bests as unknown[];
+    expect(bests.length).toBeGreaterThanOrEqual(4);
+    expect(await seedDemoDrills(server.db.db)).toEqual({ drills: 0, results: 0 });
+    expect((await coach.get('/api/drills/results').expect(200)).body.results).toHaveLength(results.length);
   });
 });

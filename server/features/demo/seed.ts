@@ -2,6 +2,7 @@ import type { Db } from '../../db/client';
 import { authStore } from '../auth/auth.repo';
 import { hashPassword } from '../auth/passwords';
 import { seedDemoPanels } from './demo-panel-seed';
+import { seedDemoDrills } from './demo-drills';
 import { DEMO_MEMBERS, DEMO_PASSWORD, DEMO_TEAM } from './demo-team';
 
 /** Adds whatever of the demo team is missing; running it again changes nothing. */
@@ -23,5 +24,6 @@ export async function seedDemo(db: Db): Promise<{ created: number }> {
     }
     return { created };
   });
-  return { created: seeded.created + (await seedDemoPanels(db)).created };
+  const drills = await seedDemoDrills(db);
+  return { created: seeded.created + (await seedDemoPanels(db)).created + drills.drills + drills.results };
 }

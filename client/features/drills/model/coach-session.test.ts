@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import type { DrillCall } from '../../../../shared/domain/drills/drill-calls';
 import { coachAnswer, coachDueAtMs, coachTick, outbox, readyCoach, startCoach, stopCoach } from './coach-session';
 
-const calls = [{ branch: 'C', level: 'L4' }, { station: 'left' }, { level: 'L2' }];
+const calls: DrillCall[] = [{ branch: 'C', level: 'L4' }, { station: 'left' }, { level: 'L2' }];
 const drill = { id: '6f1d2c3b-4a59-4e8f-9b0a-1c2d3e4f5a6b', name: 'Ladder' };
 const answer = (index: number) => ({ sessionId: 'session-a1', index, reactionMs: 900, errors: 0, operatorName: 'Tomas Reyes' });
 
