@@ -3,7 +3,8 @@ import a11yPlugin from 'colord/plugins/a11y';
 import { describe, expect, it } from 'vitest';
 import { DEVICE_PRESETS, panelDocumentSchema, type DevicePreset } from '../../schemas/panel';
 import { documentRuleIssues } from './document-rules';
-import { presetDevice, STARTER_DEVICE, STARTER_THEME, starterGrid, starterPanelDocument } from './starter-panel';
+import { presetDevice, STARTER_DEVICE, starterGrid, starterPanelDocument } from './starter-panel';
+import { DEFAULT_PANEL_THEME } from './tile-catalogue';
 
 extend([a11yPlugin]);
 
@@ -28,7 +29,7 @@ describe('starterPanelDocument', () => {
     a.pages[0]!.tiles.push({ id: 'x', kind: 'caption', x: 0, y: 0, w: 1, h: 1, label: '', fill: 'canvas', ink: 'text', text: 'x', size: 's' });
     a.theme.text = '#000000';
     expect(starterPanelDocument().pages[0]!.tiles).toEqual([]);
-    expect(starterPanelDocument().theme.text).toBe(STARTER_THEME.text);
+    expect(starterPanelDocument().theme.text).toBe(DEFAULT_PANEL_THEME.text);
   });
 });
 
@@ -45,7 +46,7 @@ describe('starterGrid', () => {
   });
 });
 
-describe('STARTER_THEME', () => {
+describe('the starter theme', () => {
   it.each([
     ['text', 'surface'],
     ['text', 'canvas'],
@@ -53,6 +54,7 @@ describe('STARTER_THEME', () => {
     ['muted', 'canvas'],
   ] as const)('%s on %s reads at 4.5:1 or more', (ink, fill) => {
     // Outside check: colord's a11y plugin computes the WCAG 2 contrast ratio independently of our code.
-    expect(colord(STARTER_THEME[ink]).contrast(STARTER_THEME[fill])).toBeGreaterThanOrEqual(4.5);
+    const theme = starterPanelDocument().theme;
+    expect(colord(theme[ink]).contrast(theme[fill])).toBeGreaterThanOrEqual(4.5);
   });
 });

@@ -1,6 +1,7 @@
 // Pure: imports only shared files. The document a new panel starts with: the chosen device, a grid of
-// roughly 80 px cells fitted to it, Pitwall's dark theme and one empty page.
-import { DEVICE_PRESETS, type Device, type DevicePreset, type Grid, type PanelDocument, type Theme } from '../../schemas/panel';
+// roughly 80 px cells fitted to it, Pitwall's default panel theme (the tile catalogue's) and one empty page.
+import { DEVICE_PRESETS, type Device, type DevicePreset, type Grid, type PanelDocument } from '../../schemas/panel';
+import { DEFAULT_PANEL_THEME } from './tile-catalogue';
 
 /** The tablet a panel is laid out for when nobody chose one. */
 export const STARTER_DEVICE: Device = { preset: 'tablet-1280x800', widthPx: 1280, heightPx: 800, orientation: 'landscape' };
@@ -8,19 +9,6 @@ export const STARTER_DEVICE: Device = { preset: 'tablet-1280x800', widthPx: 1280
 /** Roughly the size of one grid cell in CSS px: a 1280 × 800 screen gets 16 × 10 cells. */
 export const STARTER_CELL_PX = 80;
 export const STARTER_GAP_PX = 8;
-
-/** Pitwall's asphalt-and-signal colours (client/app/styles.css); every text colour reads at 4.5:1 or more on its fills. */
-export const STARTER_THEME: Theme = {
-  canvas: '#0c0e10',
-  surface: '#1d2228',
-  text: '#eef1f4',
-  accent: '#ffbb3d',
-  accentText: '#0c0e10',
-  ok: '#2fbf8f',
-  warn: '#ffcf6e',
-  danger: '#ff7a59',
-  muted: '#8893a0',
-};
 
 /** A preset device held landscape or portrait. */
 export function presetDevice(preset: DevicePreset, orientation: Device['orientation'] = 'landscape'): Device {
@@ -44,7 +32,7 @@ export function starterPanelDocument(device: Device = STARTER_DEVICE): PanelDocu
   return {
     device: { ...device },
     grid: starterGrid(device),
-    theme: { ...STARTER_THEME },
+    theme: { ...DEFAULT_PANEL_THEME },
     pages: [{ id: 'main', name: 'Main', tiles: [] }],
   };
 }
