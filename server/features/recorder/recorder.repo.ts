@@ -2,12 +2,7 @@ import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { ChannelValue } from '../../../shared/protocol/messages';
 import type { Executor } from '../../db/executor';
 import { recordingEvents, recordings, recordingStreamSeqs } from '../../db/schema/index';
-
-/**
- * Events the relay adds itself (operator selections, robot acks) have no robot seq: they are numbered from
- * here up, per recording, so they never meet the robot's seqs (which count from 0 within a stream).
- */
-export const RELAY_EVENT_SEQ_BASE = 1_000_000_000;
+import { RELAY_EVENT_SEQ_BASE } from '../recordings/recording-files';
 
 export interface RelayEvent {
   /** Robot time, like the robot's own events. */

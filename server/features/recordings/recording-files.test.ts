@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { decodeTelemetry } from '../../../shared/protocol/telemetry-codec';
-import { csvLines, parseCsvNumber, planUpload, recordingRecords, samplesJson, sniffFormat, storedColumn } from './recording-files';
+import { decodeTelemetry, encodeTelemetry } from '../../../shared/protocol/telemetry-codec';
+import { encodeRecording } from '../../../shared/protocol/recording-file';
+import { csvLines, parseCsvNumber, planUpload, RELAY_EVENT_SEQ_BASE, recordingRecords, samplesJson, sniffFormat, storedColumn } from './recording-files';
 
 const text = (s: string) => new TextEncoder().encode(s);
 const bits = (f: Float32Array) => Array.from(new Uint32Array(f.buffer, f.byteOffset, f.length));
@@ -116,6 +117,24 @@ describe('recordingRecords', () => {
     expect(batches.map((r) => r.type === 'telemetry_batch' && [r.t0Ms, r.ticks])).toEqual([
       [0, 2],
       [35, 1],
+    ]);
+  });
+});
+
+describe('planUpload (Pitwall file)', () => {
+  it('keeps the operator selections as selection events, numbered after the robot events from RELAY_EVENT_SEQ_BASE', () => {
+    const bytes = encodeRecording({ format: 'pitwall-recording', version: 1, source: 'live', robot: 'Gullwing', startedAtMs: 0 }, [
+      { type: 'signals', signals: [{ index: 0, name: 'drive/pose/x', type: 'number', unit: 'm' }] },
+      { type: 'selection', tMs: 1000, channel: 'op/reef/branch', value: 'C' },
+      { type: 'telemetry_batch', seq: 0, t0Ms: 1000, dtMs: 20, ticks: 2, data: encodeTelemetry([[0.5], [0.6]], 1) },
+      { type: 'event', seq: 1, tMs: 1010, kind: 'placed', data: { branch: 'C', level: 'L4' } },
+      { type: 'selection', tMs: 1020, channel: 'op/reef/level', value: 'L4' },
+    ]);
+    const plan = planUpload(bytes);
+    expect(plan.events).toEqual([
+      { seq: 1, tMs: 1010, kind: 'placed', data: { branch: 'C', level: 'L4' } },
+      { seq: RELAY_EVENT_SEQ_BASE, tMs: 1000, kind: 'selection', data: { channel: 'op/reef/branch', value: 'C' } },
+      { seq: RELAY_EVENT_SEQ_BASE + 1, tMs: 1020, kind: 'selection', data: { channel: 'op/reef/level', value: 'L4' } },
     ]);
   });
 });

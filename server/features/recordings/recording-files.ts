@@ -41,6 +41,12 @@ export interface UploadPlan {
 }
 
 export const CSV_HEADERS = ['time_s,signal,value', 'time,signal,value'] as const;
+
+/**
+ * Events without a robot seq (operator selections, robot acks, as the recorder adds them or a file's
+ * `selection` records) are numbered from here up, per recording, so they never meet the robot's seqs.
+ */
+export const RELAY_EVENT_SEQ_BASE = 1_000_000_000;
 const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47];
 
 const isMsgpackMap = (b: number) => (b >= 0x80 && b <= 0x8f) || b === 0xde || b === 0xdf;
@@ -86,6 +92,7 @@ function planPitwallFile(bytes: Uint8Array): UploadPlan {
   let signals: Signal[] | undefined;
   const batches: DecodedBatch[] = [];
   const events: StoredEventInput[] = [];
+  const selections: Extract<RecordingRecord, { type: 'selection' }>[] = [];
   const seqs = new Set<number>();
   file.records.forEach((record, i) => {
     const where = `record ${i + 1} (${record.type}${'seq' in record ? ` seq ${record.seq}` : ''})`;
@@ -106,10 +113,15 @@ function planPitwallFile(bytes: Uint8Array): UploadPlan {
         events.push({ seq: record.seq, tMs: record.tMs, kind: record.kind, data: record.data ?? null });
         return;
       case 'selection':
-        // Operator selections have no table yet; they are not stored.
+        selections.push(record);
         return;
     }
   });
+  // Selections carry no seq: they are numbered as the recorder numbers the relay's own events.
+  const firstSelectionSeq = events.reduce((next, e) => Math.max(next, e.seq + 1), RELAY_EVENT_SEQ_BASE);
+  selections.forEach((s, n) =>
+    events.push({ seq: firstSelectionSeq + n, tMs: s.tMs, kind: 'selection', data: { channel: s.channel, value: s.value } }),
+  );
   if (!signals || batches.length === 0) throw new UploadFileError('Not a valid Pitwall recording: it has no telemetry (no signals or no telemetry_batch records)');
   const signalCount = signals.length;
   batches.sort((a, b) => a.seq - b.seq);
