@@ -551,6 +551,13 @@ describe('the demo seed', () => {
       device: { widthPx: 1280, heightPx: 800 },
     });
     expect(practice).toMatchObject({ isTeamPanel: false, publishedVersion: null, latestVersion: { number: 1 } });
+    // Most recently changed first: the match panel's second version is a day old, the practice layout two.
+    expect(list.panels.map((p) => p.name)).toEqual([DEMO_MATCH_PANEL_NAME, DEMO_PRACTICE_PANEL_NAME]);
+    expect(match.tileCount).toBe(DEMO_MATCH_PANEL.pages[0]!.tiles.length);
+    const history = panelVersionListSchema.parse((await programmer.get(`/api/panels/${match.id}/versions`).expect(200)).body).versions;
+    expect(history.map((v) => v.number)).toEqual([2, 1]);
+    expect(Date.parse(history[0]!.createdAt)).toBeGreaterThan(Date.parse(history[1]!.createdAt));
+    expect(Date.now() - Date.parse(history[0]!.createdAt)).toBeGreaterThan(20 * 3_600_000);
 
     const operator = await signIn('operator@harborlight.example');
     const published = publishedPanelSchema.parse((await operator.get('/api/panels/published').expect(200)).body);

@@ -17,8 +17,10 @@ interface Author {
   name: string;
 }
 
-async function addPanel(repo: PanelsRepo, teamId: string, author: Author, name: string, versions: { document: PanelDocument; message: string }[]) {
-  const panelId = await repo.insertPanel({ teamId, name, createdBy: author.id });
+type SeedVersion = { document: PanelDocument; message: string; createdAt: Date };
+
+async function addPanel(repo: PanelsRepo, teamId: string, author: Author, name: string, versions: SeedVersion[]) {
+  const panelId = await repo.insertPanel({ teamId, name, createdBy: author.id, createdAt: versions[0]!.createdAt });
   let versionId = '';
   for (const [index, version] of versions.entries()) {
     versionId = await repo.insertVersion({ panelId, number: index + 1, authorId: author.id, authorName: author.name, ...version });
@@ -38,20 +40,22 @@ export async function seedDemoPanels(db: Db, now: () => Date = () => new Date())
   const programmer = await auth.findUserByEmail(programmerEmail);
   if (!team || !programmer) return { created: 0 };
   const author = { id: programmer.id, name: programmer.name };
+  // A history that reads like the days before the event: the newest change a day old.
+  const hoursAgo = (hours: number) => new Date(now().getTime() - hours * 3_600_000);
 
   return panelsStore(db).transaction(async (repo) => {
     let created = 0;
     if (!(await repo.findIdByName(team.id, DEMO_MATCH_PANEL_NAME))) {
       const match = await addPanel(repo, team.id, author, DEMO_MATCH_PANEL_NAME, [
-        { document: firstDraft(DEMO_MATCH_PANEL), message: 'Reef, level and station pickers with the target echo' },
-        { document: DEMO_MATCH_PANEL, message: 'Auto routine, algae and endgame pickers, robot lamps and readouts' },
+        { document: firstDraft(DEMO_MATCH_PANEL), message: 'Reef, level and station pickers with the target echo', createdAt: hoursAgo(72) },
+        { document: DEMO_MATCH_PANEL, message: 'Auto routine, algae and endgame pickers, robot lamps and readouts', createdAt: hoursAgo(26) },
       ]);
       await repo.setPublishedVersion(match.panelId, match.latestVersionId);
       if (!(await repo.lockTeamPanel(team.id))) await repo.setTeamPanel(team.id, match.panelId, author.id, now());
       created += 1;
     }
     if (!(await repo.findIdByName(team.id, DEMO_PRACTICE_PANEL_NAME))) {
-      await addPanel(repo, team.id, author, DEMO_PRACTICE_PANEL_NAME, [{ document: DEMO_PRACTICE_PANEL, message: 'Practice drives' }]);
+      await addPanel(repo, team.id, author, DEMO_PRACTICE_PANEL_NAME, [{ document: DEMO_PRACTICE_PANEL, message: 'Practice drives', createdAt: hoursAgo(50) }]);
       created += 1;
     }
     return { created };

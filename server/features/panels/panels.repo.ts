@@ -2,6 +2,7 @@ import { and, desc, eq, isNull, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Role } from '../../../shared/domain/roles';
 import type {
+  Device,
   Panel,
   PanelDocument,
   PanelSummary,
@@ -43,6 +44,8 @@ export interface NewVersion {
   authorId: string;
   authorName: string;
   message: string;
+  /** Default: the transaction's start (the demo seed backdates its history). */
+  createdAt?: Date;
 }
 
 /** The panel row as a write sees it after locking it. */
@@ -53,8 +56,8 @@ export interface LockedPanel {
 }
 
 export function panelsRepo(db: Executor) {
-  /** Summaries, with the newest document, of the team's panels that match `where`. */
-  async function summaries(teamId: string, where: SQL | undefined): Promise<(PanelSummary & { document: PanelDocument })[]> {
+  /** Summaries of the team's panels that match `where`; device and tile count are read inside the database. */
+  async function summaries(teamId: string, where: SQL | undefined): Promise<PanelSummary[]> {
     const rows = await db
       .select({
         id: panels.id,
@@ -68,7 +71,8 @@ export function panelsRepo(db: Executor) {
           message: latest.message,
           createdAt: latest.createdAt,
         },
-        latestDocument: latest.document,
+        device: sql<Device>`${latest.document} -> 'device'`,
+        tileCount: sql<number>`(select coalesce(sum(jsonb_array_length(page -> 'tiles')), 0)::int from jsonb_array_elements(${latest.document} -> 'pages') page)`,
         latestRole: latestAuthor.role,
         published: {
           id: published.id,
@@ -92,13 +96,12 @@ export function panelsRepo(db: Executor) {
     return rows.map((row) => ({
       id: row.id,
       name: row.name,
-      device: row.latestDocument.device,
+      device: row.device,
       latestVersion: toVersionSummary(row.latest, row.latestRole),
       publishedVersion: row.published ? toVersionSummary(row.published, row.publishedRole) : null,
       isTeamPanel: row.isTeamPanel,
-      tileCount: row.latestDocument.pages.reduce((n, page) => n + page.tiles.length, 0),
+      tileCount: row.tileCount,
       createdAt: row.createdAt.toISOString(),
-      document: row.latestDocument,
     }));
   }
 
@@ -116,13 +119,15 @@ export function panelsRepo(db: Executor) {
   return {
     /** The team's panels, most recently changed first. */
     async list(teamId: string): Promise<PanelSummary[]> {
-      return (await summaries(teamId, undefined)).map(({ document: _document, ...summary }) => summary);
+      return summaries(teamId, undefined);
     },
 
     /** One of the team's panels with its newest document, or undefined (unknown, deleted or another team's). */
     async find(teamId: string, panelId: string): Promise<Panel | undefined> {
-      const [panel] = await summaries(teamId, eq(panels.id, panelId));
-      return panel;
+      const [summary] = await summaries(teamId, eq(panels.id, panelId));
+      if (!summary) return undefined;
+      const [row] = await db.select({ document: panelVersions.document }).from(panelVersions).where(eq(panelVersions.id, summary.latestVersion.id));
+      return { ...summary, document: row!.document };
     },
 
     /** Locks the team's panel row until the transaction ends, so saves, publishes and deletes take turns. */
@@ -182,7 +187,7 @@ export function panelsRepo(db: Executor) {
       return row?.id;
     },
 
-    async insertPanel(input: { teamId: string; name: string; createdBy: string }): Promise<string> {
+    async insertPanel(input: { teamId: string; name: string; createdBy: string; createdAt?: Date }): Promise<string> {
       const [row] = await db.insert(panels).values(input).returning({ id: panels.id });
       return row!.id;
     },
