@@ -37,7 +37,7 @@ export function OptionPickerTile({ tile, theme, isDesign, canWrite, aspect, live
   const chosen = live?.value;
   return (
     <>
-      <TileHeading label={tile.label} ink={theme[tile.ink]} aside={isDesign ? undefined : <PhaseChip live={chosen === undefined ? undefined : live} theme={theme} />} />
+      <TileHeading label={tile.label} ink={theme[tile.ink]} aside={isDesign || chosen === undefined ? undefined : <PhaseChip live={live} theme={theme} />} />
       <div
         role="group"
         aria-label={tile.label || tile.channel}

@@ -41,7 +41,7 @@ export function ReefPickerTile({ tile, theme, season, seat, isDesign, canWrite, 
       <TileHeading
         label={tile.label}
         ink={theme[tile.ink]}
-        aside={isDesign ? <span className="normal-case opacity-70">{seatText} view</span> : <PhaseChip live={chosen === undefined ? undefined : live} theme={theme} />}
+        aside={isDesign || chosen === undefined ? <span className="normal-case opacity-70">{seatText} view</span> : <PhaseChip live={live} theme={theme} />}
       />
       <div className="flex min-h-0 flex-1 items-center justify-center p-[2cqmin]">
         {layout ? (

@@ -1,0 +1,69 @@
+import { Navigate, useLocation, useParams } from 'react-router-dom';
+import { can } from '../../../shared/domain/roles';
+import { useMe } from '../../features/auth/api/me';
+import { signInPathFor } from '../../features/auth/model/safe-next-path';
+import type { RunPanel } from '../../features/run/api/run-panel';
+import { usePublishedRunPanel, useRunPanel } from '../../features/run/api/run-panel';
+import { useRunServiceWorker, type OfflineState } from '../../features/run/hooks/use-run-screen';
+import { RunMessage } from '../../features/run/components/run-message';
+import { RunScreen } from '../../features/run/components/run-screen';
+import { isApiError } from '../../lib/api-error';
+import { SafetyCaution } from '../safety-caution';
+
+type Loaded = { isPending: boolean; isError: boolean; error: unknown; data: RunPanel | undefined; refetch: () => unknown; isFetching: boolean };
+
+function RunGate({ query, backHref, offline }: { query: Loaded; backHref: string; offline?: OfflineState }) {
+  const location = useLocation();
+  if (query.isPending) return <RunMessage isBusy title="Opening the panel…" backHref={backHref} />;
+  if (query.isError || !query.data) {
+    const status = isApiError(query.error) ? query.error.status : 0;
+    if (status === 401) return <Navigate to={signInPathFor(location.pathname, location.search)} replace />;
+    if (status === 403) return <ForbiddenMessage backHref={backHref} />;
+    if (status === 404)
+      return (
+        <RunMessage title="No panel is published yet" backHref={backHref}>
+          The driver station runs the team’s published panel. Ask a programmer to publish one from Panels.
+        </RunMessage>
+      );
+    return (
+      <RunMessage
+        tone="problem"
+        title="The panel could not be loaded"
+        backHref={backHref}
+        action={
+          <button type="button" onClick={() => query.refetch()} disabled={query.isFetching} className="inline-flex min-h-12 items-center rounded-lg bg-signal-500 px-5 text-lg font-bold text-asphalt-950 disabled:opacity-60">
+            {query.isFetching ? 'Trying again…' : 'Try again'}
+          </button>
+        }
+      >
+        {query.error instanceof Error ? query.error.message : 'Pitwall could not reach its server.'} Check the cable to the driver-station laptop.
+      </RunMessage>
+    );
+  }
+  return <RunScreen panel={query.data} caution={<SafetyCaution />} backHref={backHref} offline={offline} />;
+}
+
+function ForbiddenMessage({ backHref }: { backHref: string }) {
+  return (
+    <RunMessage tone="problem" title="Run mode is for operators and programmers" backHref={backHref}>
+      Your role can watch matches and recordings but cannot send targets to the robot. A team lead can change your role.
+    </RunMessage>
+  );
+}
+
+/** `/run`: the team's published panel, full screen at the driver station (works offline after the first load). */
+export function Component() {
+  const query = usePublishedRunPanel();
+  const offline = useRunServiceWorker(query.isSuccess);
+  return <RunGate query={query} backHref="/" offline={offline} />;
+}
+
+/** `/panels/:id/run`: that panel's published version, else its latest as a draft (programmers testing). */
+export function PanelRunComponent() {
+  const { id = '' } = useParams();
+  const me = useMe();
+  const panel = useRunPanel(id);
+  const backHref = `/panels/${id}/edit`;
+  if (me.data && !can(me.data.role, 'panels.run')) return <ForbiddenMessage backHref="/" />;
+  return <RunGate query={panel} backHref={backHref} />;
+}

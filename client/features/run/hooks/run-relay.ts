@@ -1,0 +1,36 @@
+import { useCallback, useSyncExternalStore } from 'react';
+import type { ChannelValue } from '../../../../shared/protocol/messages';
+import type { SocketLike } from '../../../../shared/protocol/relay-link';
+import { RelayClient, type PublishTicket, type RelayState } from '../../../lib/relay-client';
+
+let shared: RelayClient | undefined;
+
+const relayUrl = () => `${location.protocol === 'https:' ? 'wss' : 'ws'}://${location.host}/relay`;
+
+/**
+ * Run mode's relay connection. It says hello as a `panel`, so the relay holds it to the panel stale limit
+ * (400 ms without a frame) and the tablet notices a pulled cable as fast; it keeps the current selection
+ * and sends it again after every reconnect.
+ */
+export function runRelayClient(): RelayClient {
+  shared ??= new RelayClient(
+    {
+      connect: () => new WebSocket(relayUrl()) as unknown as SocketLike,
+      now: () => performance.timeOrigin + performance.now(),
+      setTimer: (fn, ms) => window.setTimeout(fn, ms),
+      clearTimer: (handle) => window.clearTimeout(handle as number),
+      random: Math.random,
+      scheduleFlush: (fn) => requestAnimationFrame(() => fn()),
+    },
+    { hello: { kind: 'panel', name: 'Run mode tablet' }, heartbeatMs: 100, staleMs: 400, ackTimeoutMs: 1000, resendAfterReconnect: true },
+  );
+  return shared;
+}
+
+/** The run relay's state (re-read at most once per frame) and its publish. */
+export function useRunRelay(): { state: RelayState; publish: (channel: string, value: ChannelValue) => PublishTicket; client: RelayClient } {
+  const client = runRelayClient();
+  const state = useSyncExternalStore(client.subscribe, client.getSnapshot);
+  const publish = useCallback((channel: string, value: ChannelValue) => client.publish(channel, value), [client]);
+  return { state, publish, client };
+}

@@ -1,0 +1,182 @@
+// Run mode in headless Chromium against the real server, database and relay, with the real simulator as the
+// robot: the operator opens /run (the demo team's published panel), taps a branch and a level, sees the
+// robot has them with the round trip, and sees through the relay that the simulator took them and drives to
+// the branch; the relay socket is pulled and comes back with the selection re-sent; a viewer and a coach
+// get the 403 message; the panel opens again with no network; a robot that is not the simulator brings
+// up the safety caution.
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '../../server/features/demo/demo-team';
+import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
+import { season2025 } from '../../shared/domain/season/season-2025';
+import type { ServerMessage } from '../../shared/protocol/messages';
+import { RobotClient } from '../../simulator/src/robot-client';
+import { startLiveRobot, type LiveRobot } from '../../simulator/src/live-robot';
+import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
+import { relayUrl, sessionCookie, TestRelayClient } from '../support/relay-clients';
+
+let stack: BrowserStack;
+let robotKey: string;
+let sim: LiveRobot | undefined;
+let watcher: TestRelayClient;
+let page: Page;
+/** While true the relay cable is "pulled": the tablet's relay sockets are closed and new ones refused. */
+let isCablePulled = false;
+
+type Value = Extract<ServerMessage, { type: 'value' }>;
+type Target = { branch?: string | null; level?: string | null; xM?: number; yM?: number };
+
+beforeAll(async () => {
+  stack = await startBrowserStack();
+  const server = stack.server;
+  const lead = await server.client();
+  await lead.post('/api/auth/sign-in').send({ email: 'lead@harborlight.example', password: DEMO_PASSWORD }).expect(200);
+  robotKey = (await lead.post('/api/team/robot-keys').send({ name: 'Gullwing' }).expect(201)).body.secret as string;
+  // A human tap keeps the simulator's stand-in operator away for the rest of the test.
+  sim = startLiveRobot({ url: relayUrl(server), key: robotKey, name: 'Gullwing', season: season2025, robot: DEFAULT_ROBOT_PROFILE, alliance: 'blue', seed: 11, autopilotAfterS: 600 });
+  const cookie = await sessionCookie(server, 'programmer@harborlight.example', DEMO_PASSWORD);
+  watcher = await TestRelayClient.connect(relayUrl(server), { cookie, origin: server.url }, 'viewer', 'test watcher');
+  watcher.send({ type: 'subscribe', prefixes: ['op/', 'robot/'] });
+});
+afterAll(async () => {
+  watcher?.stop();
+  sim?.stop();
+  await stack?.close();
+});
+
+const until = (test: () => boolean, timeoutMs = 5000) => expect.poll(test, { timeout: timeoutMs, interval: 25 }).toBe(true);
+const shot = (name: string) => page.screenshot({ path: path.join(SHOTS, name) });
+const relayPill = () => page.getByRole('status', { name: 'Relay link' });
+const echo = () => page.locator('[data-tile-kind="target-echo"]');
+
+function distanceToM(target: { xM: number; yM: number }): number {
+  const pose = sim!.model.pose;
+  return Math.hypot(pose.xM - target.xM, pose.yM - target.yM);
+}
+
+describe('run mode', () => {
+  it('tells a viewer and a coach that run mode is not for their role', async () => {
+    for (const role of ['viewer', 'coach'] as const) {
+      const p = await signInAs(stack, role);
+      await p.goto(`${stack.server.url}/run`);
+      await p.getByRole('heading', { name: 'Run mode is for operators and programmers' }).waitFor();
+      expect(await p.getByRole('button', { name: 'Branch A' }).count()).toBe(0);
+      if (role === 'viewer') await p.screenshot({ path: path.join(SHOTS, 'run-viewer-403.png') });
+      await p.context().close();
+    }
+  });
+
+  it('opens the published panel full screen for the operator, connected to the simulator', async () => {
+    page = await signInAs(stack, 'operator');
+    // The tablet's relay socket goes through Playwright, so the test can pull the cable and plug it back in.
+    await page.context().routeWebSocket(/\/relay$/, (ws) => {
+      if (isCablePulled) return void ws.close({ code: 1001, reason: 'cable pulled' });
+      ws.connectToServer();
+    });
+    await page.goto(`${stack.server.url}/run`);
+    await page.getByText('Gullwing match panel').waitFor();
+    await relayPill().getByText('Relay connected').waitFor();
+    await page.getByTestId('simulator-band').waitFor();
+    await page.getByRole('status', { name: 'Robot link' }).getByText('Robot Gullwing').waitFor();
+    expect(await page.getByRole('button', { name: /^Branch [A-L]$/ }).count()).toBe(12);
+    // Run mode allows no scrolling, zooming or text selection.
+    const lock = await page.evaluate(() => ({
+      viewport: document.querySelector('meta[name="viewport"]')?.getAttribute('content'),
+      overflow: getComputedStyle(document.body).overflow,
+      touchAction: getComputedStyle(document.body).touchAction,
+      userSelect: getComputedStyle(document.body).userSelect,
+      scrolls: document.documentElement.scrollHeight > innerHeight || document.documentElement.scrollWidth > innerWidth,
+    }));
+    expect(lock).toMatchObject({ overflow: 'hidden', touchAction: 'none', userSelect: 'none', scrolls: false });
+    expect(lock.viewport).toContain('user-scalable=no');
+  });
+
+  it('sends a tapped branch and level to the simulator, which acknowledges them and drives to the branch', async () => {
+    // Taps count in teleop (in auto the robot runs its routine): wait for it, with coral on board.
+    await until(() => sim!.model.mode === 'teleop' && sim!.model.holding === 'coral', 40_000);
+    const branch = sim!.model.target.branch === 'G' ? 'J' : 'G';
+    const ackedBefore = watcher.messages.length;
+    const poseAtTap = { ...sim!.model.pose };
+    await page.getByRole('button', { name: `Branch ${branch}` }).click();
+    await page.getByRole('button', { name: 'Level L3' }).click();
+    await echo().getByText(/Robot has it · \d+ ms/).waitFor();
+    expect(await page.getByRole('button', { name: `Branch ${branch}` }).getAttribute('aria-pressed')).toBe('true');
+    expect(await echo().locator('[data-channel="op/reef/branch"]').getAttribute('data-phase')).toBe('acked');
+    expect(await echo().locator('[data-channel="op/reef/level"]').getAttribute('data-phase')).toBe('acked');
+    await shot('run-operator-acked.png');
+
+    // Through the relay: the tablet's values, the simulator's acks, and its retained robot/target.
+    await watcher.next((m) => m.type === 'value' && m.channel === 'op/reef/branch' && m.value === branch && m.from.kind === 'panel', 3000);
+    const target = await watcher.next<Value>(
+      (m) => m.type === 'value' && m.channel === 'robot/target' && (m.value as Target).branch === branch && (m.value as Target).level === 'L3',
+      4000,
+    );
+    expect(watcher.messages.slice(ackedBefore).some((m) => m.type === 'acked' && m.channel === 'op/reef/branch')).toBe(true);
+    expect(sim!.model.selection).toMatchObject({ branch, level: 'L3' });
+    const goal = target.value as { xM: number; yM: number };
+    const startM = Math.hypot(poseAtTap.xM - goal.xM, poseAtTap.yM - goal.yM);
+    let closestM = startM;
+    await until(() => {
+      closestM = Math.min(closestM, distanceToM(goal));
+      return closestM < Math.max(0.15, startM - 0.5);
+    }, 8000);
+    expect(closestM).toBeLessThan(startM);
+  });
+
+  it('shows the lost relay link, keeps a tap made meanwhile, and re-sends the selection when the link is back', async () => {
+    const revsBefore = watcher.messages.filter((m) => m.type === 'value' && m.channel === 'op/reef/level').length;
+    isCablePulled = true;
+    await page.evaluate(() => window.pitwallRunRelay!.dropConnection());
+    await relayPill().getByText('Relay link lost · reconnecting').waitFor();
+    expect(await relayPill().getAttribute('data-tone')).toBe('danger');
+    await page.getByRole('button', { name: 'Coral station Right' }).click();
+    await echo().getByText('Link lost · resends').waitFor();
+    await shot('run-operator-link-lost.png');
+
+    isCablePulled = false;
+    await relayPill().getByText('Relay connected').waitFor({ timeout: 10_000 });
+    await echo().getByText(/Robot has it · \d+ ms/).waitFor({ timeout: 5000 });
+    // The level was re-sent on the new connection, and the station tapped while away went out too.
+    await until(() => watcher.messages.filter((m) => m.type === 'value' && m.channel === 'op/reef/level').length > revsBefore);
+    await watcher.next((m) => m.type === 'value' && m.channel === 'op/station' && m.value === 'right' && m.from.kind === 'panel', 3000);
+    await until(() => sim!.model.selection.station === 'right');
+  });
+
+  it('opens with no network after the first load, from the service worker', async () => {
+    await page.locator('[data-offline="ready"]').waitFor({ timeout: 10_000 });
+    await page.context().setOffline(true);
+    isCablePulled = true;
+    await page.reload();
+    await page.getByText('Gullwing match panel').waitFor();
+    // The reef comes from the season profile, kept by the service worker too.
+    await page.locator('[data-tile-kind="reef-picker"] polygon').waitFor();
+    expect(await page.getByRole('button', { name: /^Branch [A-L]$/ }).count()).toBe(12);
+    await relayPill().getByText('Relay link lost · reconnecting').waitFor();
+    await shot('run-operator-offline.png');
+    await page.context().setOffline(false);
+    isCablePulled = false;
+    await relayPill().getByText('Relay connected').waitFor({ timeout: 10_000 });
+  });
+
+  it('asks for the safety caution before the panel goes live to a robot that is not the simulator', async () => {
+    sim!.stop();
+    sim = undefined;
+    await page.getByRole('status', { name: 'Robot link' }).getByText('No robot connected').waitFor({ timeout: 10_000 });
+    const real = new RobotClient({ url: relayUrl(stack.server), key: robotKey, name: 'Gullwing', reads: ['op/reef/branch'], onValue: () => {} });
+    real.start();
+    try {
+      await until(() => real.status === 'open');
+      real.publish('robot/simulated', false);
+      const gate = page.getByRole('alertdialog', { name: /live to a real robot: Gullwing/ });
+      await gate.waitFor();
+      await gate.getByText('A panel connected to a real robot can make it move').waitFor();
+      await shot('run-operator-real-robot.png');
+      await gate.getByRole('button', { name: 'I understand — open the panel' }).click();
+      await page.getByTestId('live-robot-band').waitFor();
+      expect(await page.getByTestId('simulator-band').count()).toBe(0);
+    } finally {
+      real.stop();
+    }
+  });
+});
