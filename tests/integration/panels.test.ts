@@ -348,6 +348,22 @@ describe('deleting and duplicating', () => {
     expect(list.panels.map((p) => p.id)).not.toContain(panel.id);
   });
 
+  it('never leaves a deleted panel as the team\'s published one when publish and delete race', async () => {
+    for (let round = 0; round < 5; round += 1) {
+      const panel = await createPanel(clients.programmer, `Race ${round}`);
+      const [publish, remove] = await Promise.all([
+        clients.programmer.post(`/api/panels/${panel.id}/publish`).send({ versionId: panel.latestVersion.id }),
+        clients.lead.delete(`/api/panels/${panel.id}`),
+      ]);
+      // Either the publish went first (and the delete was refused) or the delete did (and the publish found nothing).
+      expect([[200, 409], [404, 204]]).toContainEqual([publish.status, remove.status]);
+      const published = publishedPanelSchema.parse((await clients.operator.get('/api/panels/published').expect(200)).body);
+      if (remove.status === 204) expect(published.panelId).not.toBe(panel.id);
+      else expect(published.panelId).toBe(panel.id);
+    }
+    await clients.programmer.post(`/api/panels/${main.id}/publish`).send({ versionId: main.latestVersion.id }).expect(200);
+  });
+
   it('duplicates the newest document into a new panel called "<name> (copy)", or the name given', async () => {
     const panel = await createPanel(clients.programmer, 'Original', documentLabelled('old'));
     await clients.programmer.put(`/api/panels/${panel.id}`).send({ baseVersionId: panel.latestVersion.id, document: documentLabelled('newest') }).expect(200);

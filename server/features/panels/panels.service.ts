@@ -56,7 +56,7 @@ export function copyName(name: string): string {
 
 /** A file name safe in a Content-Disposition header and on any disk: `<name>.pitwall-panel.json`. */
 export function exportFileName(name: string): string {
-  const safe = name.replace(/[\\/:*?"<>|\u0000-\u001f]+/g, '-').trim() || 'panel';
+  const safe = name.replace(/[\\/:*?"<>|\u0000-\u001f]+/g, '-').replace(/^[\s-]+|[\s-]+$/g, '') || 'panel';
   return `${safe}.pitwall-panel.json`;
 }
 
