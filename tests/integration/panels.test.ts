@@ -173,6 +173,17 @@ describe('versions and saving', () => {
     await clients.lead.get(`/api/panels/${panel.id}/versions/${UNKNOWN}`).expect(404);
   });
 
+  it('keeps a removed member\'s versions, with their name and no role', async () => {
+    const leaving = await addMember(server, clients.lead, { email: 'leaving@harborlight.example', role: 'programmer', name: 'Ada Finch' });
+    const panel = await createPanel(leaving, 'Handed over');
+    const members = (await clients.lead.get('/api/team/members').expect(200)).body.members as { userId: string; email: string }[];
+    const userId = members.find((m) => m.email === 'leaving@harborlight.example')!.userId;
+    await clients.lead.delete(`/api/team/members/${userId}`).expect(204);
+    const versions = panelVersionListSchema.parse((await clients.lead.get(`/api/panels/${panel.id}/versions`).expect(200)).body).versions;
+    expect(versions).toEqual([expect.objectContaining({ number: 1, author: { id: userId, name: 'Ada Finch', role: null } })]);
+    expect(panelSchema.parse((await clients.lead.get(`/api/panels/${panel.id}`).expect(200)).body).document).toEqual(DEMO_MATCH_PANEL);
+  });
+
   it('renames without a new version when only the name changes', async () => {
     const panel = await createPanel(clients.programmer, 'Old name');
     const before = await counts();
