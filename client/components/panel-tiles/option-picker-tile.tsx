@@ -4,6 +4,7 @@ import { PhaseChip } from './phase-chip';
 import { PressTarget } from './press-target';
 import { TileHeading } from './tile-frame';
 import type { ChannelLive } from './tile-types';
+import { optionColumns } from './tile-values';
 
 type OptionTile = TileOf<'level-picker' | 'station-picker' | 'algae-picker' | 'cage-picker' | 'choice-pad'>;
 
@@ -17,19 +18,6 @@ type OptionPickerTileProps = {
   live: ChannelLive | undefined;
   onChoose?: (value: string) => void;
 };
-
-/** Columns for `count` options in a box of `aspect`: one row when wide, one column when tall, a grid between. */
-export function optionColumns(count: number, aspect: number): number {
-  if (count <= 1) return 1;
-  let best = { columns: 1, score: -Infinity };
-  for (let columns = 1; columns <= count; columns += 1) {
-    const rows = Math.ceil(count / columns);
-    // The most square cells win: each option's shortest side as a share of the box.
-    const score = Math.min(aspect / columns, 1 / rows) - (columns * rows - count) * 0.01;
-    if (score > best.score) best = { columns, score };
-  }
-  return best.columns;
-}
 
 /** Level, station, algae and cage pickers and the choice pad: one big segment per option. */
 export function OptionPickerTile({ tile, theme, isDesign, canWrite, aspect, live, onChoose }: OptionPickerTileProps) {

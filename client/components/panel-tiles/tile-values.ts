@@ -85,3 +85,16 @@ export function isOn(value: ChannelValue | undefined): boolean {
   if (typeof value === 'string') return value === 'true' || value === 'on';
   return false;
 }
+
+/** Columns for `count` options in a box of `aspect`: one row when wide, one column when tall, a grid between. */
+export function optionColumns(count: number, aspect: number): number {
+  if (count <= 1) return 1;
+  let best = { columns: 1, score: -Infinity };
+  for (let columns = 1; columns <= count; columns += 1) {
+    const rows = Math.ceil(count / columns);
+    // The most square cells win: each option's shortest side as a share of the box.
+    const score = Math.min(aspect / columns, 1 / rows) - (columns * rows - count) * 0.01;
+    if (score > best.score) best = { columns, score };
+  }
+  return best.columns;
+}
