@@ -1,7 +1,8 @@
 // Pure: imports only shared files. The panel check: what is wrong or risky in a panel document, listed for the
 // designer (and marked on its canvas) as it is edited.
 //
-// Rules and their sources: touch targets under 44 × 44 CSS px warn (WCAG 2.2 SC 2.5.5 Target Size,
+// Rules and their sources: touch targets (as run mode draws them on the device, touch-targets.ts) under
+// 44 × 44 CSS px warn (WCAG 2.2 SC 2.5.5 Target Size,
 // Enhanced) and under 24 × 24 are errors (SC 2.5.8 Target Size, Minimum); text below 4.5:1 against its
 // background warns (SC 1.4.3 Contrast, Minimum); overlapping tiles, tiles without a channel and two tiles
 // writing one channel with different value types or value sets are errors; channels the panel writes that
@@ -92,10 +93,10 @@ function describeTile(tile: Tile): string {
 
 function targetIssues(doc: PanelDocument, page: Page, season: SeasonProfile | undefined): PanelIssue[] {
   const screen = deviceSize(doc.device);
-  const at = `${screen.widthPx} × ${screen.heightPx} ${doc.device.orientation}`;
+  const at = `${screen.widthPx} × ${screen.heightPx} ${doc.device.orientation} in run mode`;
   const issues: PanelIssue[] = [];
   for (const tile of page.tiles) {
-    const targets = tileTouchTargets(tile, doc.device, doc.grid, season);
+    const targets = tileTouchTargets(tile, doc.device, doc.grid, { season });
     if (targets.length === 0) continue;
     const smallest = targets.reduce((a, b) => (Math.min(b.widthPx, b.heightPx) < Math.min(a.widthPx, a.heightPx) ? b : a));
     const sidePx = Math.min(smallest.widthPx, smallest.heightPx);

@@ -8,10 +8,24 @@
 // the whole box less a `3cqmin` margin; the reef picker draws a square SVG (viewBox 2 × 2.05 m, `2cqmin`
 // padding) of the reef ringed by twelve 28.4° ring sectors from the hexagon's corner radius + 0.14 m out to
 // 2.03 m. Change both together.
+//
+// Run mode (client/features/run/components/) draws a status strip RUN_STATUS_STRIP_PX high across the top
+// and fits the page below it keeping the device's shape, so on the device itself every tile is drawn a little
+// smaller than the grid alone says (1280 × 800 → 1190.4 × 744); targets are measured on that canvas.
 import type { Device, Grid, Tile } from '../../schemas/panel';
 import { season2025 } from '../season/season-2025';
 import type { SeasonProfile } from '../season/season-profile';
-import { deviceSize, tileRectPx, type RectPx, type SizePx } from './grid';
+import { deviceSize, fitScale, tileRectPx, type RectPx, type SizePx } from './grid';
+
+/** Height of run mode's status strip (Tailwind h-14 in run-status-strip.tsx), CSS px. */
+export const RUN_STATUS_STRIP_PX = 56;
+
+/** The CSS size run mode draws the panel's canvas at on the device: the screen less the strip, device shape kept. */
+export function runCanvasSize(device: Pick<Device, 'widthPx' | 'heightPx' | 'orientation'>): SizePx {
+  const screen = deviceSize(device);
+  const scale = fitScale(device, { widthPx: screen.widthPx, heightPx: screen.heightPx - RUN_STATUS_STRIP_PX }, true);
+  return { widthPx: screen.widthPx * scale, heightPx: screen.heightPx * scale };
+}
 
 /** One thing an operator taps. `rectPx` is its box on the device, where it does not depend on the seat. */
 export type TouchTarget = {
@@ -81,11 +95,23 @@ export function largestSquareInRingSector(innerR: number, outerR: number, sweepD
   return lo;
 }
 
-type Layout = { device: Pick<Device, 'widthPx' | 'heightPx' | 'orientation'>; grid: Grid; season?: SeasonProfile };
+type DeviceSize = Pick<Device, 'widthPx' | 'heightPx' | 'orientation'>;
 
-/** Every target of a tile as run mode lays it out; tiles nobody taps (lamps, readouts, clock, caption, echo) have none. */
-export function tileTouchTargets(tile: Tile, device: Layout['device'], grid: Grid, season: SeasonProfile = season2025): TouchTarget[] {
-  const box = tileRectPx(tile, device, grid);
+export type TouchTargetOptions = {
+  /** The season whose reef the reef picker draws (default 2025). */
+  season?: SeasonProfile;
+  /** The CSS size the canvas is drawn at; default `runCanvasSize(device)`. Pass `deviceSize(device)` for the bare grid. */
+  canvasPx?: SizePx;
+};
+
+/**
+ * Every target of a tile as run mode lays it out on the device, in CSS px of the drawn canvas (its boxes
+ * relative to the canvas's top-left); tiles nobody taps (lamps, readouts, clock, caption, echo) have none.
+ */
+export function tileTouchTargets(tile: Tile, device: DeviceSize, grid: Grid, options: TouchTargetOptions = {}): TouchTarget[] {
+  const season = options.season ?? season2025;
+  const canvas = options.canvasPx ?? runCanvasSize(device);
+  const box = tileRectPx(tile, { widthPx: canvas.widthPx, heightPx: canvas.heightPx, orientation: 'landscape' }, grid);
   const cq = Math.min(box.widthPx, box.heightPx) / 100;
   switch (tile.kind) {
     case 'push-pad':
@@ -131,9 +157,9 @@ export function tileTouchTargets(tile: Tile, device: Layout['device'], grid: Gri
   }
 }
 
-/** The size of a picker's (or pad's) smallest button at the device size; zero for a tile nobody taps. */
-export function pickerButtonSize(tile: Tile, device: Layout['device'], grid: Grid, season: SeasonProfile = season2025): SizePx {
-  const targets = tileTouchTargets(tile, device, grid, season);
+/** The size of a picker's (or pad's) smallest button in run mode on the device; zero for a tile nobody taps. */
+export function pickerButtonSize(tile: Tile, device: DeviceSize, grid: Grid, options: TouchTargetOptions = {}): SizePx {
+  const targets = tileTouchTargets(tile, device, grid, options);
   if (targets.length === 0) return { widthPx: 0, heightPx: 0 };
   return {
     widthPx: Math.min(...targets.map((t) => t.widthPx)),
