@@ -145,7 +145,7 @@ export function tileTouchTargets(tile: Tile, device: DeviceSize, grid: Grid, opt
       }));
     }
     case 'reef-picker': {
-      const side = reefBranchButtonSidePx(box, season);
+      const side = reefGeometryIn(box, season).buttonSidePx;
       return season.reef.branchLetters.value.map((letter) => ({ key: letter, label: `Branch ${letter}`, widthPx: side, heightPx: side }));
     }
     case 'lamp':
@@ -167,19 +167,41 @@ export function pickerButtonSize(tile: Tile, device: DeviceSize, grid: Grid, opt
   };
 }
 
-/** The largest square inside one branch button of a reef picker drawn in `box`. */
-function reefBranchButtonSidePx(box: RectPx, season: SeasonProfile): number {
+export type ReefPickerGeometry = {
+  /** Side of the square reef drawing (the SVG's viewBox fitted into the tile below its heading), CSS px. */
+  drawingSidePx: number;
+  pxPerM: number;
+  /** The branch buttons' ring, view metres: from the hexagon's corner radius + the ring gap out to the outer edge. */
+  innerRM: number;
+  outerRM: number;
+  /** Sweep of one branch button, degrees (30° less the gap between buttons). */
+  sweepDeg: number;
+  /** Side of the largest square inside one branch button, CSS px. */
+  buttonSidePx: number;
+};
+
+/** How big run mode draws a reef picker's reef and branch buttons. */
+export function reefPickerGeometry(tile: Tile, device: DeviceSize, grid: Grid, options: TouchTargetOptions = {}): ReefPickerGeometry {
+  const season = options.season ?? season2025;
+  const canvas = options.canvasPx ?? runCanvasSize(device);
+  const box = tileRectPx(tile, { widthPx: canvas.widthPx, heightPx: canvas.heightPx, orientation: 'landscape' }, grid);
+  return reefGeometryIn(box, season);
+}
+
+function reefGeometryIn(box: RectPx, season: SeasonProfile): ReefPickerGeometry {
   const minSidePx = Math.min(box.widthPx, box.heightPx);
   const cq = minSidePx / 100;
   const padPx = TILE_LAYOUT.reefPadCqmin * cq;
   const areaWidthPx = box.widthPx - 2 * padPx;
   const areaHeightPx = box.heightPx - headingHeightPx(minSidePx) - 2 * padPx;
-  const pxPerM = Math.max(0, Math.min(areaWidthPx, areaHeightPx)) / (2 * TILE_LAYOUT.reefViewHalfM);
+  const drawingSidePx = Math.max(0, Math.min(areaWidthPx, areaHeightPx));
+  const pxPerM = drawingSidePx / (2 * TILE_LAYOUT.reefViewHalfM);
   // The larger reef of the two alliances gives the narrower ring: measure that one.
   const centreToFaceM = Math.max(season.reefs.blue.centreToFaceM.value, season.reefs.red.centreToFaceM.value);
-  const innerR = centreToFaceM / Math.cos(Math.PI / 6) + TILE_LAYOUT.reefRingGapM;
+  const innerRM = centreToFaceM / Math.cos(Math.PI / 6) + TILE_LAYOUT.reefRingGapM;
+  const outerRM = TILE_LAYOUT.reefRingOuterM;
   const sweepDeg = 360 / 12 - TILE_LAYOUT.reefSectorGapDeg;
-  return largestSquareInRingSector(innerR, TILE_LAYOUT.reefRingOuterM, sweepDeg) * pxPerM;
+  return { drawingSidePx, pxPerM, innerRM, outerRM, sweepDeg, buttonSidePx: largestSquareInRingSector(innerRM, outerRM, sweepDeg) * pxPerM };
 }
 
 function inset(box: RectPx, topPx: number, rightPx: number, bottomPx: number, leftPx: number): RectPx {
