@@ -20,7 +20,11 @@ const router = createBrowserRouter([
       { path: 'dev/inbox', lazy: () => import('./routes/dev-inbox') },
       // Run mode is full screen, outside the app frame.
       { path: 'run', lazy: () => import('./routes/run') },
+      // The designer is full screen too: the canvas needs the width.
+      { path: 'panels/:id/edit', lazy: () => import('./routes/panel-edit') },
       { path: 'panels/:id/run', lazy: () => import('./routes/run').then((m) => ({ Component: m.PanelRunComponent })) },
+      { path: 'drills/follow', lazy: () => import('./routes/drills').then((m) => ({ Component: m.FollowComponent })) },
+      { path: 'drills/:id/run', lazy: () => import('./routes/drills').then((m) => ({ Component: m.RunComponent })) },
       {
         path: '/',
         lazy: () => import('./routes/app-frame'),
@@ -32,6 +36,7 @@ const router = createBrowserRouter([
           { path: 'recordings/:id', lazy: () => import('./routes/recordings').then((m) => ({ Component: m.ReplayComponent })) },
           { path: 'cycles', lazy: () => import('./routes/cycles') },
           { path: 'drills', lazy: () => import('./routes/drills') },
+          { path: 'drills/:id/send', lazy: () => import('./routes/drills').then((m) => ({ Component: m.SendComponent })) },
           { path: 'season', lazy: () => import('./routes/season') },
           { path: 'settings/team', lazy: () => import('./routes/team-settings') },
           { path: 'settings/robot', lazy: () => import('./routes/robot-settings') },

@@ -1,8 +1,9 @@
 // Pure: the canvas's pointer gesture as a small state machine, idle → pointing → dragging | resizing → idle.
 // Positions are device CSS px (the canvas's own pixels, already divided by its on-screen scale). The machine
 // never edits the document: it answers with editor actions, and a drag commits once, on release.
-import { snapOffset, type ResizeHandle } from '../../../../shared/domain/panels/layout';
-import type { EditorAction } from './editor-state';
+import { findPage, findTile, groupOffset, resizedRect, snapOffset, type CellRect, type ResizeHandle } from '../../../../shared/domain/panels/layout';
+import type { PanelDocument } from '../../../../shared/schemas/panel';
+import { minSizeOf, type EditorAction } from './editor-state';
 
 export type GestureTarget = { kind: 'move'; tileId: string } | { kind: 'resize'; tileId: string; handle: ResizeHandle };
 
@@ -96,4 +97,18 @@ export function resizePreview(g: Gesture, cell: CellPx): ResizePreview | null {
   if (g.phase !== 'resizing') return null;
   const { dx, dy } = snapOffset(g.dxPx, g.dyPx, cell.widthPx, cell.heightPx);
   return { tileId: g.tileId, handle: g.handle, dx, dy };
+}
+
+/** Where the dragged tiles would land (whole cells, the group kept inside the grid): the canvas's drop outline. */
+export function dropRects(doc: PanelDocument, pageId: string, preview: DragPreview): CellRect[] {
+  const offset = groupOffset(doc, pageId, preview.tileIds, preview.dx, preview.dy);
+  const page = findPage(doc, pageId);
+  return (page?.tiles ?? []).filter((t) => preview.tileIds.includes(t.id)).map((t) => ({ x: t.x + offset.dx, y: t.y + offset.dy, w: t.w, h: t.h }));
+}
+
+/** The rectangle a resize would give (kept inside the grid and at least the kind's minimum size). */
+export function resizeRect(doc: PanelDocument, pageId: string, preview: ResizePreview): CellRect | null {
+  const tile = findTile(doc, pageId, preview.tileId);
+  if (!tile) return null;
+  return resizedRect(tile, preview.handle, preview.dx, preview.dy, doc.grid, minSizeOf(tile.kind));
 }

@@ -1,0 +1,197 @@
+// Through the real UI in headless Chromium: a programmer creates a panel, drags a reef picker and a level picker
+// from the palette onto the canvas (real mouse moves past dnd-kit's activation distance), binds channels in the
+// property form and watches the panel check flag and clear a clash, saves, publishes and sees the library show
+// the published version; two members editing one panel get the conflict dialog without losing work; an operator
+// sees the library read only.
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '../../shared/domain/roles';
+import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
+
+let stack: BrowserStack;
+
+beforeAll(async () => {
+  stack = await startBrowserStack();
+});
+afterAll(async () => {
+  await stack?.close();
+});
+
+const signIn = (role: Role): Promise<Page> => signInAs(stack, role, { width: 1440, height: 900 });
+
+/** Presses the mouse on `from`, moves in small steps (dnd-kit starts a drag after 6 px) and releases over `to`. */
+async function dragFromTo(page: Page, from: { x: number; y: number }, to: { x: number; y: number }, steps = 24) {
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(from.x + 4, from.y + 4, { steps: 2 });
+  await page.mouse.move(from.x + 12, from.y + 10, { steps: 3 });
+  await page.mouse.move(to.x, to.y, { steps });
+  await page.mouse.up();
+}
+
+async function centreOf(page: Page, selector: string) {
+  const box = (await page.locator(selector).first().boundingBox())!;
+  return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+}
+
+/** A point on the canvas given in its own (device) pixels. */
+async function canvasPoint(page: Page, xPx: number, yPx: number) {
+  const canvas = page.getByTestId('design-canvas');
+  const box = (await canvas.boundingBox())!;
+  const scale = Number(await canvas.getAttribute('data-scale'));
+  return { x: box.x + xPx * scale, y: box.y + yPx * scale };
+}
+
+async function createPanel(page: Page, name: string): Promise<string> {
+  await page.goto(`${stack.server.url}/panels`);
+  await page.getByRole('button', { name: 'New panel' }).click();
+  const dialog = page.getByRole('dialog', { name: 'New panel' });
+  await dialog.getByLabel('Name').fill(name);
+  await dialog.getByLabel('Target tablet').selectOption('tablet-1280x800');
+  await dialog.getByRole('button', { name: 'Create and open' }).click();
+  await expect.poll(() => page.url()).toMatch(/\/panels\/[0-9a-f-]{36}\/edit$/);
+  await page.getByTestId('design-canvas').waitFor();
+  return page.url().split('/panels/')[1]!.split('/')[0]!;
+}
+
+describe('the panel designer through the UI', () => {
+  it('builds a panel by dragging tiles from the palette, binds channels, checks, saves, publishes and shows it in the library', async () => {
+    const page = await signIn('programmer');
+    await page.goto(`${stack.server.url}/panels`);
+    await page.getByRole('heading', { name: 'Team panels' }).waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'panels-library-before.png'), fullPage: true });
+
+    // The create dialog refuses a blank name before anything is sent.
+    await page.getByRole('button', { name: 'New panel' }).click();
+    const dialog = page.getByRole('dialog', { name: 'New panel' });
+    await dialog.getByRole('button', { name: 'Create and open' }).click();
+    await expect.poll(() => dialog.getByText('Name the panel').isVisible()).toBe(true);
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+
+    await createPanel(page, 'Lakeshore quals panel');
+    await page.screenshot({ path: path.join(SHOTS, 'panel-designer-empty.png') });
+
+    // Drag the reef picker to the canvas's top-left area and the level picker to its right.
+    await dragFromTo(page, await centreOf(page, '[data-palette-kind="reef-picker"]'), await canvasPoint(page, 100, 100));
+    await page.locator('[data-design-tile]').first().waitFor();
+    await dragFromTo(page, await centreOf(page, '[data-palette-kind="level-picker"]'), await canvasPoint(page, 620, 100));
+    await expect.poll(() => page.locator('[data-design-tile]').count()).toBe(2);
+    const kinds = await page.locator('[data-design-tile]').evaluateAll((els) => els.map((e) => e.closest('[data-tile-kind]') ?? e.parentElement?.querySelector('[data-tile-kind]')).map((e) => e?.getAttribute('data-tile-kind')));
+    expect(kinds).toEqual(['reef-picker', 'level-picker']);
+    // Dropped where the pointer was: the level picker's top-left cell is under (620, 100) on 80 px cells.
+    const level = page.locator('[data-design-tile]').nth(1);
+    await expect.poll(() => level.getAttribute('aria-label')).toContain('at column 8, row 2');
+    await expect.poll(() => page.getByTestId('save-status').textContent()).toContain('Unsaved changes');
+
+    // The level picker is selected after its drop: bind it to the reef branch channel, which the reef picker
+    // writes with other values — the panel check flags the clash on both tiles.
+    const channel = page.getByLabel('Channel');
+    await channel.fill('op/reef/branch');
+    const clash = page.locator('[data-issue-rule="type-clash"]');
+    await clash.first().waitFor();
+    await expect.poll(() => page.locator('[data-design-tile][data-issue="error"]').count()).toBe(2);
+    await page.screenshot({ path: path.join(SHOTS, 'panel-designer-check-issue.png') });
+    // A channel that is not a channel gets an inline message and is not applied.
+    await channel.fill('reef level');
+    await expect.poll(() => page.getByText('A channel is op/… or robot/…').isVisible()).toBe(true);
+    // Fixed: back to the level channel and the clash is gone.
+    await channel.fill('op/reef/level');
+    await expect.poll(() => clash.count()).toBe(0);
+    await page.getByLabel('Label', { exact: true }).fill('Level');
+
+    // Move the level picker one cell right with the keyboard, undo, redo.
+    await level.focus();
+    await page.keyboard.press('ArrowRight');
+    await expect.poll(() => level.getAttribute('aria-label')).toContain('at column 9, row 2');
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => level.getAttribute('aria-label')).toContain('at column 8, row 2');
+    await page.keyboard.press('Control+Shift+z');
+    await expect.poll(() => level.getAttribute('aria-label')).toContain('at column 9, row 2');
+
+    await page.getByLabel('Note for this version (optional)').fill('Reef and level pickers');
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    await expect.poll(() => page.getByTestId('save-status').textContent()).toContain('Saved as v2');
+    await page.screenshot({ path: path.join(SHOTS, 'panel-designer-saved.png') });
+
+    await page.getByRole('button', { name: 'Publish v2' }).click();
+    await page.getByRole('dialog', { name: /Publish v2/ }).getByRole('button', { name: 'Publish v2' }).click();
+    await expect.poll(() => page.getByTestId('save-status').textContent()).toContain('published');
+
+    // The versions list shows both versions, v2 published, and what changed between them.
+    await page.getByRole('button', { name: 'Versions' }).click();
+    const versions = page.getByRole('dialog', { name: 'Versions' });
+    await versions.locator('[data-version-number="2"]').getByText('Published').waitFor();
+    await versions.getByTestId('version-diff').getByText(/Added ‘Level’/).waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'panel-designer-versions.png') });
+    await versions.getByRole('button', { name: 'Close' }).click();
+
+    // The contract lists the two channels the panel writes.
+    await page.getByRole('button', { name: 'Channel contract' }).click();
+    const contract = page.getByRole('dialog', { name: 'Channel contract' });
+    await expect.poll(() => contract.getByRole('tabpanel').textContent()).toContain('op/reef/level');
+    await contract.getByRole('tab', { name: 'Java' }).click();
+    await expect.poll(() => contract.getByRole('tabpanel').textContent()).toContain('public static final String');
+    await contract.getByRole('button', { name: 'Close' }).click();
+
+    await page.getByRole('link', { name: 'Panels' }).click();
+    const row = page.locator('tr', { hasText: 'Lakeshore quals panel' });
+    await expect.poll(() => row.getByTestId('published-cell').textContent()).toContain('v2 published');
+    await page.screenshot({ path: path.join(SHOTS, 'panels-library-published.png'), fullPage: true });
+    await page.context().close();
+  });
+
+  it('shows the second of two editors a conflict and keeps their work', async () => {
+    const first = await signIn('programmer');
+    const id = await createPanel(first, 'Pit rehearsal panel');
+    const second = await signIn('lead');
+    await second.goto(`${stack.server.url}/panels/${id}/edit`);
+    await second.getByTestId('design-canvas').waitFor({ timeout: 5000 }).catch(async (e) => {
+      await second.screenshot({ path: path.join(SHOTS, 'debug-second.png') });
+      throw e;
+    });
+
+    // The first editor places a push pad and saves (v2).
+    await first.locator('[data-palette-kind="push-pad"]').click();
+    await first.getByRole('button', { name: 'Save', exact: true }).click();
+    await expect.poll(() => first.getByTestId('save-status').textContent()).toContain('Saved as v2');
+
+    // The second, still on v1, places a lamp and a readout and saves: the server refuses the stale base.
+    await second.locator('[data-palette-kind="lamp"]').click();
+    await second.locator('[data-palette-kind="readout"]').click();
+    await second.getByRole('button', { name: 'Save', exact: true }).click();
+    const conflict = second.getByRole('dialog', { name: 'Someone else saved this panel first' });
+    await conflict.waitFor();
+    await expect.poll(() => conflict.getByText(/Their version\s*v2/).isVisible()).toBe(true);
+    await expect.poll(() => conflict.getByText(/Added ‘Eject’/).isVisible()).toBe(true);
+    await second.screenshot({ path: path.join(SHOTS, 'panel-designer-conflict.png') });
+    // Deciding later loses nothing: both new tiles are still on the canvas.
+    await conflict.getByRole('button', { name: 'Decide later' }).click();
+    await expect.poll(() => second.locator('[data-design-tile]').count()).toBe(2);
+    await second.getByRole('button', { name: 'Save', exact: true }).click();
+    await conflict.waitFor();
+    await conflict.getByRole('button', { name: 'Keep mine (save on top)' }).click();
+    await expect.poll(() => second.getByTestId('save-status').textContent()).toContain('Saved as v3');
+    await expect.poll(() => second.locator('[data-design-tile]').count()).toBe(2);
+    await first.context().close();
+    await second.context().close();
+  });
+
+  it('gives an operator a read-only library', async () => {
+    const page = await signIn('operator');
+    await page.goto(`${stack.server.url}/panels`);
+    await page.getByText('Read only').first().waitFor();
+    await page.locator('tr', { hasText: 'Lakeshore quals panel' }).waitFor();
+    expect(await page.getByRole('button', { name: 'New panel' }).count()).toBe(0);
+    expect(await page.getByRole('link', { name: /^Edit / }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: /^(Rename|Duplicate|Delete) / }).count()).toBe(0);
+    expect(await page.getByRole('link', { name: /^View / }).count()).toBeGreaterThan(0);
+    await page.screenshot({ path: path.join(SHOTS, 'panels-library-operator.png'), fullPage: true });
+    // Opening a panel shows it without the palette or save.
+    await page.getByRole('link', { name: 'View Lakeshore quals panel' }).click();
+    await page.getByTestId('design-canvas').waitFor();
+    expect(await page.getByRole('navigation', { name: 'Tile palette' }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Save', exact: true }).count()).toBe(0);
+    await page.context().close();
+  });
+});
