@@ -98,12 +98,24 @@ describe('touch targets (WCAG 2.5.5 enhanced 44 px, 2.5.8 minimum 24 px)', () =>
 describe('text contrast (WCAG 1.4.3, 4.5:1)', () => {
   // #777777 on white is 4.48:1 and #767676 on white 4.54:1 (WCAG 2.2 formulas; FACTS.md worked values).
   it('warns at 4.48:1 and passes at 4.54:1', () => {
-    const readout = tile('readout', 'volts', { x: 0, y: 0 });
+    const readout = tile('readout', 'volts', { x: 0, y: 0 }, { thresholds: null });
     const failing = checkPanel(doc([readout], LANDSCAPE_1280, { theme: { ...DEFAULT_PANEL_THEME, surface: '#ffffff', text: '#777777' } }));
     expect(failing).toHaveLength(1);
     expect(failing[0]).toMatchObject({ id: 'low-contrast:main:volts', rule: 'low-contrast', severity: 'warning', tileIds: ['volts'] });
     expect(failing[0]!.message).toBe('‘Battery’ (readout): its text (Text on Surface) has a contrast of 4.47:1; text needs at least 4.5:1 (WCAG 1.4.3).');
     expect(checkPanel(doc([readout], LANDSCAPE_1280, { theme: { ...DEFAULT_PANEL_THEME, surface: '#ffffff', text: '#767676' } }))).toEqual([]);
+  });
+
+  it('checks the colours a readout and the match clock turn to', () => {
+    const readout = tile('readout', 'volts', { x: 0, y: 0 });
+    const clock = tile('match-clock', 'clock', { x: 3, y: 0 });
+    const plain = tile('readout', 'temp', { x: 6, y: 0 }, { thresholds: null });
+    // #767676 on white passes 4.5:1, #777777 does not (FACTS.md worked values).
+    const theme = { ...DEFAULT_PANEL_THEME, surface: '#ffffff', text: '#000000', warn: '#777777', danger: '#767676' };
+    const issues = checkPanel(doc([readout, clock, plain], LANDSCAPE_1280, { theme }));
+    expect(issues.map((i) => i.id)).toEqual(['low-contrast:main:volts:warn', 'low-contrast:main:clock:warn']);
+    expect(issues[0]!.message).toBe('‘Battery’ (readout): past its warn threshold its value turns Warn on Surface, a contrast of 4.47:1; text needs at least 4.5:1 (WCAG 1.4.3).');
+    expect(issues[1]!.message).toContain('in the last 20 s it turns Warn on Surface');
   });
 
   it('checks the theme colours option buttons draw, once per page, naming the button tiles', () => {

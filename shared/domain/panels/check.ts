@@ -128,6 +128,31 @@ function contrastIssues(theme: Theme, page: Page): PanelIssue[] {
       message: `${describeTile(tile)}: its text (${THEME_COLOUR_NAMES[tile.ink]} on ${THEME_COLOUR_NAMES[tile.fill]}) has a contrast of ${formatContrastRatio(ratio)}; text needs at least 4.5:1 (WCAG 1.4.3).`,
     });
   }
+  for (const tile of page.tiles) {
+    // Readouts past a threshold draw their value in Warn or Danger, the match clock its last 20 s in Warn.
+    const states: { colour: ThemeColour; when: string }[] =
+      tile.kind === 'readout' && tile.thresholds
+        ? [
+            { colour: 'warn', when: 'past its warn threshold its value turns' },
+            { colour: 'danger', when: 'past its danger threshold its value turns' },
+          ]
+        : tile.kind === 'match-clock'
+          ? [{ colour: 'warn', when: 'in the last 20 s it turns' }]
+          : [];
+    for (const state of states) {
+      if (state.colour === tile.ink) continue;
+      const ratio = contrastRatio(theme[state.colour], theme[tile.fill]);
+      if (ratio >= TEXT_CONTRAST_MINIMUM) continue;
+      issues.push({
+        id: `low-contrast:${page.id}:${tile.id}:${state.colour}`,
+        rule: 'low-contrast',
+        severity: 'warning',
+        pageId: page.id,
+        tileIds: [tile.id],
+        message: `${describeTile(tile)}: ${state.when} ${THEME_COLOUR_NAMES[state.colour]} on ${THEME_COLOUR_NAMES[tile.fill]}, a contrast of ${formatContrastRatio(ratio)}; text needs at least 4.5:1 (WCAG 1.4.3).`,
+      });
+    }
+  }
   const buttonTiles = page.tiles.filter((t) => tileWrites(t).length > 0 && t.kind !== 'reef-picker');
   if (buttonTiles.length > 0) {
     for (const pair of BUTTON_TEXT_PAIRS) {
