@@ -83,6 +83,7 @@ export const AREAS: readonly Area[] = [
     path: '/drills',
     label: 'Drills',
     icon: 'drills',
+    isAvailable: true,
     tagline: 'Rehearse target calls before the match',
     description:
       'A drill is a sequence of calls — “L4, branch C” — that the operator answers by tapping the panel. Every answer is timed and checked, so the drive team can see selection speed improve over a build season.',
