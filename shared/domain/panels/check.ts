@@ -11,7 +11,7 @@ import type { Page, PanelDocument, Theme, ThemeColour, Tile } from '../../schema
 import type { SeasonProfile } from '../season/season-profile';
 import { contrastRatio, formatContrastRatio, TEXT_CONTRAST_MINIMUM } from './contrast';
 import { cellRectsOverlap, deviceSize } from './grid';
-import { kindNeedsChannel, THEME_COLOUR_NAMES, TILE_CATALOGUE, tileDisplayName, tileReads, tileWrites, type ChannelUse } from './tile-catalogue';
+import { kindNeedsChannel, THEME_COLOUR_NAMES, TILE_CATALOGUE, tileDisplayName, tileWrites, type ChannelUse } from './tile-catalogue';
 import { tileTouchTargets } from './touch-targets';
 
 export type PanelIssueRule = 'target-below-44' | 'target-below-24' | 'low-contrast' | 'overlap' | 'no-channel' | 'type-clash' | 'robot-does-not-read';
@@ -304,11 +304,4 @@ function unreadIssues(doc: PanelDocument, reads: readonly string[]): PanelIssue[
     }
   }
   return issues;
-}
-
-/** Every channel the panel's tiles read (lamps, readouts, the match clock, target echoes), sorted. */
-export function readChannels(doc: PanelDocument): string[] {
-  const seen = new Set<string>();
-  for (const page of doc.pages) for (const tile of page.tiles) for (const use of tileReads(tile)) if (!isBlank(use.channel)) seen.add(use.channel);
-  return [...seen].sort();
 }
