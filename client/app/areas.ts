@@ -70,6 +70,7 @@ export const AREAS: readonly Area[] = [
     path: '/cycles',
     label: 'Cycles',
     icon: 'cycles',
+    isAvailable: true,
     tagline: 'Cycle times per match and across an event',
     description:
       'Each cycle is split into acquire, travel, align and place, with the target that was called and the one reached. Per match: count, median and p90 cycle time, points by level, call-to-place latency. Across matches: trends by level, face, station and operator — each linked back into the replay.',

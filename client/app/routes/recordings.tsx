@@ -18,6 +18,7 @@ import { RecordingsTable } from '../../features/recordings/components/recordings
 import { UploadPanel } from '../../features/recordings/components/upload-panel';
 import { RecordingDetailsForm } from '../../features/recordings/components/recording-details-form';
 import { ReplayPage } from '../../features/replay/components/replay-page';
+import { CyclesView } from '../../features/cycles/components/cycles-view';
 import { matchLabel } from '../../features/recordings/model/format';
 import {
   activeFilterCount,
@@ -149,6 +150,7 @@ export function ReplayComponent() {
             me={{ name: me.user.name, role: me.role }}
             initialMoment={initialMoment}
             details={<RecordingDetailsForm recording={r} role={me.role} canEdit={can(me.role, 'recordings.manage')} />}
+            cycles={(timeline) => <CyclesView recordingId={r.id} isLive={r.status === 'recording'} timeline={timeline} />}
           />
         </>
       )}

@@ -31,10 +31,14 @@ type ReplayPageProps = {
   initialMoment: string | null;
   /** The recording's details, composed in by the route (they belong to the recordings feature). */
   details?: ReactNode;
+  /** The cycles view, composed in by the route, given the timeline cursor to follow and move. */
+  cycles?: (timeline: ReplayTimeline) => ReactNode;
 };
 
+export type ReplayTimeline = { now: () => number; subscribe: (listener: () => void) => () => void; seek: (tS: number) => void };
+
 /** The replay of one recording: one timeline cursor drives the traces, the field map, the values and the notes. */
-export function ReplayPage({ recording, me, initialMoment, details }: ReplayPageProps) {
+export function ReplayPage({ recording, me, initialMoment, details, cycles }: ReplayPageProps) {
   const isLive = recording.status === 'recording';
   const signals = useSignals(recording.id, isLive);
   const events = useEvents(recording.id, isLive);
@@ -82,6 +86,7 @@ export function ReplayPage({ recording, me, initialMoment, details }: ReplayPage
         events={events.data.events}
         store={store}
         details={details}
+        cycles={cycles}
       />
     </ReplayContext>
   );
@@ -89,6 +94,7 @@ export function ReplayPage({ recording, me, initialMoment, details }: ReplayPage
 
 type ReplayBodyProps = {
   details?: ReactNode;
+  cycles?: ReplayPageProps['cycles'];
   recording: RecordingDetail;
   isLive: boolean;
   me: { name: string; role: Role };
@@ -97,7 +103,7 @@ type ReplayBodyProps = {
   store: ReplayStore;
 };
 
-function ReplayBody({ recording, isLive, me, signals, events, store, details }: ReplayBodyProps) {
+function ReplayBody({ recording, isLive, me, signals, events, store, details, cycles }: ReplayBodyProps) {
   const byName = useMemo(() => new Map(signals.map((s) => [s.name, s])), [signals]);
   const [panes, setPanes] = useState<string[][]>(() => {
     const chosen = DEFAULT_PANES.map((names) => names.filter((n) => byName.has(n)));
@@ -257,6 +263,11 @@ function ReplayBody({ recording, isLive, me, signals, events, store, details }: 
           )}
         </div>
       </div>
+      {cycles && (
+        <Section title="Cycles" description="Pick a cycle in the chart or the table to move the cursor to its start." className="p-4">
+          {cycles({ now: () => store.get().tS, subscribe: store.subscribe, seek: (tS) => (store.pause(), store.seek(tS)) })}
+        </Section>
+      )}
     </div>
   );
 }
