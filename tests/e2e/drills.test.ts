@@ -121,4 +121,38 @@ describe('drills through the UI', () => {
     await operator.context().close();
     await coach.context().close();
   });
+
+  it('lets the coach write a drill in the editor, with a message for each field that needs one', async () => {
+    const page = await signInAs(stack, 'coach', { width: 1280, height: 800 });
+    await page.goto(`${stack.server.url}/drills`);
+    await page.getByRole('button', { name: 'New drill' }).click();
+    const editor = page.getByRole('form', { name: 'New drill' });
+    await editor.getByRole('button', { name: 'Face AB' }).click();
+    await editor.getByRole('button', { name: 'Create drill' }).click();
+    await expect.poll(() => editor.getByText('Name the drill').isVisible()).toBe(true);
+    await page.screenshot({ path: path.join(SHOTS, 'drills-editor.png'), fullPage: true });
+
+    await editor.getByLabel('Name').fill('Station rhythm');
+    await editor.getByText('Scripted', { exact: true }).click();
+    await editor.getByRole('textbox', { name: 'Script' }).fill('left\nC L4\nright Q');
+    await editor.getByRole('button', { name: 'Create drill' }).click();
+    await expect.poll(() => editor.getByText(/^Call 3: /).isVisible()).toBe(true);
+    await editor.getByRole('textbox', { name: 'Script' }).fill('left\nC L4\nright\nJ L3');
+    await editor.getByText('Next call on answer', { exact: true }).click();
+    await editor.getByLabel('Seconds to answer').fill('6');
+    await editor.getByRole('button', { name: 'Create drill' }).click();
+
+    await expect.poll(() => page.getByRole('status').getByText('Saved “Station rhythm”.').isVisible()).toBe(true);
+    const card = page.getByRole('listitem', { name: 'Station rhythm' });
+    await expect.poll(() => card.textContent()).toContain('4 scripted calls: Left station, L4 · C, Right station …');
+    await expect.poll(() => card.textContent()).toContain('Next call on answer · 6 s to answer');
+    const r = await stack.server.db.db.execute<{ plan: unknown; pace: unknown }>(sql`select plan, pace from drills where name = 'Station rhythm'`);
+    expect(r.rows).toEqual([
+      {
+        plan: { mode: 'scripted', calls: [{ station: 'left' }, { branch: 'C', level: 'L4' }, { station: 'right' }, { branch: 'J', level: 'L3' }] },
+        pace: { mode: 'on-answer', limitMs: 6000 },
+      },
+    ]);
+    await page.context().close();
+  });
 });

@@ -19,13 +19,13 @@ export function BestsTable({ bests }: { bests: readonly PersonalBestEntry[] }) {
     <TableFrame caption="Personal bests per operator and drill" columns={COLUMNS}>
       {bests.map((b) => (
         <tr key={`${b.operator.id}:${b.drillId ?? b.drillName}`} className="bg-asphalt-900">
-          <td className="px-4 py-2.5 font-semibold">{b.operator.name}</td>
+          <td className="px-4 py-2.5 font-semibold whitespace-nowrap">{b.operator.name}</td>
           <td className="px-4 py-2.5 text-asphalt-300">{b.drillName}</td>
-          <td className="num px-4 py-2.5 text-right">{b.runCount}</td>
-          <td className="num px-4 py-2.5 text-right text-signal-300">{formatReaction(b.bestMedianMs)}</td>
-          <td className="num px-4 py-2.5 text-right">{formatReaction(b.fastestMs)}</td>
-          <td className="num px-4 py-2.5 text-right">{formatAccuracy(b.bestAccuracy)}</td>
-          <td className="num px-4 py-2.5 text-right text-asphalt-400">{formatDate(b.lastRunAt)}</td>
+          <td className="num px-4 py-2.5 text-right whitespace-nowrap">{b.runCount}</td>
+          <td className="num px-4 py-2.5 text-right whitespace-nowrap text-signal-300">{formatReaction(b.bestMedianMs)}</td>
+          <td className="num px-4 py-2.5 text-right whitespace-nowrap">{formatReaction(b.fastestMs)}</td>
+          <td className="num px-4 py-2.5 text-right whitespace-nowrap">{formatAccuracy(b.bestAccuracy)}</td>
+          <td className="num px-4 py-2.5 text-right whitespace-nowrap text-asphalt-400">{formatDate(b.lastRunAt)}</td>
         </tr>
       ))}
     </TableFrame>

@@ -10,7 +10,6 @@ import { pageNowMs, useDueTick } from '../hooks/use-due-tick';
 import { useDrillAnswerEntry, useOperatorCount, usePublish, useRelayStatus } from '../hooks/use-drill-relay';
 import { coachAnswer, coachDueAtMs, coachTick, outbox, readyCoach, startCoach, stopCoach, type CoachState } from '../model/coach-session';
 import { formatReaction, formatAccuracy } from '../model/format';
-import { paceSummary, planSummary } from '../model/drill-form';
 
 const newSessionId = () => `coach-${Math.random().toString(36).slice(2, 12)}`;
 
@@ -69,9 +68,6 @@ export function CoachConsole({ drill, coachName }: { drill: Drill; coachName: st
         <Badge tone={operators > 0 ? 'sky' : 'neutral'}>
           {operators === 0 ? 'No operator device on the relay' : `${operators} operator device${operators === 1 ? '' : 's'} on the relay`}
         </Badge>
-        <span className="text-sm text-asphalt-400">
-          {planSummary(drill.plan)} · {paceSummary(drill.pace)}
-        </span>
       </div>
       {operators === 0 && session.phase === 'ready' && (
         <Notice tone="info" title="Open the drill view on the operator’s tablet">

@@ -110,22 +110,25 @@ export function DrillEditor({ drill, onDone }: DrillEditorProps) {
           </div>
         </div>
       ) : (
-        <label className="flex flex-col gap-1.5">
-          <span className="text-sm font-semibold text-asphalt-200">Script</span>
+        <div className="flex flex-col gap-1.5">
+          <label htmlFor="drill-script" className="text-sm font-semibold text-asphalt-200">
+            Script
+          </label>
           <textarea
+            id="drill-script"
             name="script"
             rows={6}
             value={form.script}
             onChange={(e) => set('script', e.target.value)}
             aria-invalid={errors.script ? true : undefined}
-            aria-describedby="script-hint"
+            aria-describedby={errors.script ? 'script-hint script-error' : 'script-hint'}
             className="rounded-lg bg-asphalt-900 px-3 py-2 font-mono text-asphalt-100 ring-1 ring-asphalt-600 focus:ring-2 focus:ring-signal-400 focus:outline-none"
           />
           <span id="script-hint" className="text-sm text-asphalt-400">
             One call per line, in order: a branch and a level (<code>C L4</code>), one of them (<code>L2</code>), or a station (<code>left</code>, <code>right</code>).
           </span>
-          {errors.script && <span className="text-sm text-stop">{errors.script}</span>}
-        </label>
+          {errors.script && <span id="script-error" className="text-sm text-stop">{errors.script}</span>}
+        </div>
       )}
 
       <SegmentedControl

@@ -23,7 +23,7 @@ export function ResultsTable({ results }: { results: readonly DrillResult[] }) {
       {newestFirst.map((r) => (
         <tr key={r.id} className="bg-asphalt-900">
           <td className="num px-2 py-2 whitespace-nowrap text-asphalt-300">{formatDateTime(r.startedAt)}</td>
-          <td className="px-2 py-2 font-semibold">{r.operator.name}</td>
+          <td className="px-2 py-2 font-semibold whitespace-nowrap">{r.operator.name}</td>
           <td className="px-2 py-2">
             <span className="flex flex-wrap items-center gap-1.5">
               {r.drillName}
@@ -32,11 +32,11 @@ export function ResultsTable({ results }: { results: readonly DrillResult[] }) {
               {!r.isComplete && <Badge>Stopped</Badge>}
             </span>
           </td>
-          <td className="num px-2 py-2 text-right">{r.stats.callCount}</td>
-          <td className="num px-2 py-2 text-right text-signal-300">{formatReaction(r.stats.medianMs)}</td>
-          <td className="num px-2 py-2 text-right">{formatReaction(r.stats.p90Ms)}</td>
-          <td className="num px-2 py-2 text-right">{formatAccuracy(r.stats.accuracy)}</td>
-          <td className="num px-2 py-2 text-right">{r.stats.missCount}</td>
+          <td className="num px-2 py-2 text-right whitespace-nowrap">{r.stats.callCount}</td>
+          <td className="num px-2 py-2 text-right whitespace-nowrap text-signal-300">{formatReaction(r.stats.medianMs)}</td>
+          <td className="num px-2 py-2 text-right whitespace-nowrap">{formatReaction(r.stats.p90Ms)}</td>
+          <td className="num px-2 py-2 text-right whitespace-nowrap">{formatAccuracy(r.stats.accuracy)}</td>
+          <td className="num px-2 py-2 text-right whitespace-nowrap">{r.stats.missCount}</td>
         </tr>
       ))}
     </TableFrame>
