@@ -4,7 +4,9 @@ import { useMe } from '../../features/auth/api/me';
 import { signInPathFor } from '../../features/auth/model/safe-next-path';
 import type { RunPanel } from '../../features/run/api/run-panel';
 import { usePublishedRunPanel, useRunPanel } from '../../features/run/api/run-panel';
+import { useRunRelayWarmUp } from '../../features/run/hooks/run-relay';
 import { useRunServiceWorker, type OfflineState } from '../../features/run/hooks/use-run-screen';
+import { useSeasonProfile } from '../../components/panel-tiles/use-season-profile';
 import { RunMessage } from '../../features/run/components/run-message';
 import { RunScreen } from '../../features/run/components/run-screen';
 import { isApiError } from '../../lib/api-error';
@@ -14,6 +16,10 @@ type Loaded = { isPending: boolean; isError: boolean; error: unknown; data: RunP
 
 function RunGate({ query, backHref, offline }: { query: Loaded; backHref: string; offline?: OfflineState }) {
   const location = useLocation();
+  // Ready for the first tap sooner: the relay link and the season profile (for the reef) start while the
+  // panel itself loads, instead of after it.
+  useRunRelayWarmUp();
+  useSeasonProfile();
   if (query.isPending) return <RunMessage isBusy title="Opening the panel…" backHref={backHref} />;
   if (query.isError || !query.data) {
     const status = isApiError(query.error) ? query.error.status : 0;

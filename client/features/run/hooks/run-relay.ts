@@ -1,4 +1,4 @@
-import { useCallback, useSyncExternalStore } from 'react';
+import { useCallback, useEffect, useSyncExternalStore } from 'react';
 import type { ChannelValue } from '../../../../shared/protocol/messages';
 import type { SocketLike } from '../../../../shared/protocol/relay-link';
 import { RelayClient, type PublishTicket, type RelayState } from '../../../lib/relay-client';
@@ -33,4 +33,9 @@ export function useRunRelay(): { state: RelayState; publish: (channel: string, v
   const state = useSyncExternalStore(client.subscribe, client.getSnapshot);
   const publish = useCallback((channel: string, value: ChannelValue) => client.publish(channel, value), [client]);
   return { state, publish, client };
+}
+
+/** Starts the run relay link without reading it (no re-renders), so it connects while the panel loads. */
+export function useRunRelayWarmUp(): void {
+  useEffect(() => runRelayClient().subscribe(() => {}), []);
 }
