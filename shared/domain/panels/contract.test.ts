@@ -88,6 +88,13 @@ describe('channelContract', () => {
     expect(alone).toEqual({ writes: [], reads: [{ channel: 'op/cage', type: 'string', values: ['none', 'park', 'shallow', 'deep'], tiles: [{ id: 'echo', label: 'Target', kind: 'target-echo' }] }] });
   });
 
+  it('notes the other types when tiles disagree on a channel, in the code comments too', () => {
+    const clash = channelContract(doc([tile('level-picker', 'level'), tile('push-pad', 'quick', { channel: 'op/reef/level', label: 'Quick L4' })]));
+    expect(clash.writes[0]).toMatchObject({ channel: 'op/reef/level', type: 'string', otherTypes: ['boolean'] });
+    expect(contractJava(clash)).toContain('/** string, one of L4, L3, L2, L1 (CLASH: also written as boolean; fix the panel); written by "Level" (level picker), "Quick L4" (push pad). */');
+    expect(contractPython(clash)).toContain('# string, one of L4, L3, L2, L1 (CLASH: also written as boolean; fix the panel); written by');
+  });
+
   it('merges the value sets of pickers on one channel and skips empty channels', () => {
     const mixed = channelContract(doc([tile('level-picker', 'a', { options: [{ label: 'L4', value: 'L4' }] }), tile('level-picker', 'b', { options: [{ label: 'L1', value: 'L1' }, { label: 'L4', value: 'L4' }] }), tile('lamp', 'c', { channel: '' })]));
     expect(mixed.writes[0]!.values).toEqual(['L4', 'L1']);
@@ -130,7 +137,7 @@ describe('contractJava', () => {
   it('is one final class of channel constants with nested value classes', () => {
     expect(java).toContain('public final class GullwingPanel {\n  private GullwingPanel() {}');
     expect(java).toContain(
-      '  /** string, one of A, B, C, D, E, F, G, H, I, J, K, L; written by ‘Branch’ (reef picker). */\n  public static final String OP_REEF_BRANCH = "op/reef/branch";',
+      '  /** string, one of A, B, C, D, E, F, G, H, I, J, K, L; written by "Branch" (reef picker). */\n  public static final String OP_REEF_BRANCH = "op/reef/branch";',
     );
     expect(java).toContain('  public static final String ROBOT_BATTERY_VOLTAGE = "robot/battery/voltage";');
     expect(java).toContain(
@@ -192,7 +199,7 @@ describe('contractPython', () => {
   const python = contractPython(channelContract(matchPanel), { panelName: 'Gullwing match panel' });
 
   it('is a module of Final constants and value tuples', () => {
-    expect(python.startsWith('"""Channel contract of the Pitwall panel ‘Gullwing match panel’ (pitwall.channel-contract v1).')).toBe(true);
+    expect(python.startsWith("\"\"\"Channel contract of the Pitwall panel 'Gullwing match panel' (pitwall.channel-contract v1).")).toBe(true);
     expect(python).toContain('from typing import Final');
     expect(python).toContain(
       [

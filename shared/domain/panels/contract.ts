@@ -7,7 +7,8 @@ import { OP_CHANNELS } from '../channels';
 import { TILE_CATALOGUE, tileReads, tileWrites, type ChannelUse, type ChannelValueType } from './tile-catalogue';
 
 export type ContractTile = { id: string; label: string; kind: Tile['kind'] };
-export type ContractChannel = { channel: string; type: ChannelValueType; values?: string[]; tiles: ContractTile[] };
+/** `otherTypes`: types other tiles write on the same channel (a clash the panel check reports as an error). */
+export type ContractChannel = { channel: string; type: ChannelValueType; values?: string[]; otherTypes?: ChannelValueType[]; tiles: ContractTile[] };
 export type ChannelContract = { writes: ContractChannel[]; reads: ContractChannel[] };
 
 export const CHANNEL_CONTRACT_FORMAT = 'pitwall.channel-contract';
@@ -17,6 +18,7 @@ const contractChannelSchema = z.object({
   channel: z.string(),
   type: z.enum(['string', 'boolean', 'number', 'json']),
   values: z.array(z.string()).optional(),
+  otherTypes: z.array(z.enum(['string', 'boolean', 'number', 'json'])).optional(),
   tiles: z.array(z.object({ id: z.string(), label: z.string(), kind: z.string() })),
 });
 /** The JSON file `contractJson` writes. */
@@ -38,6 +40,7 @@ function collect(doc: PanelDocument, usesOf: (tile: Tile) => ChannelUse[]): Map<
         const entry = byChannel.get(use.channel) ?? { channel: use.channel, type: use.type, tiles: [] };
         // The first writer's type stands (the panel check reports a clash); values are the union, first seen first.
         if (use.values) entry.values = [...new Set([...(entry.values ?? []), ...use.values])];
+        if (use.type !== entry.type && !entry.otherTypes?.includes(use.type)) entry.otherTypes = [...(entry.otherTypes ?? []), use.type];
         if (!entry.tiles.some((t) => t.id === tile.id)) entry.tiles.push({ id: tile.id, label: tile.label, kind: tile.kind });
         byChannel.set(use.channel, entry);
       }
@@ -128,13 +131,14 @@ function tilesText(tiles: readonly ContractTile[]): string {
   return tiles
     .map((t) => {
       const kind = TILE_CATALOGUE[t.kind]?.label.toLowerCase() ?? t.kind;
-      return t.label.trim() ? `‘${t.label}’ (${kind})` : `a ${kind}`;
+      return t.label.trim() ? `"${t.label}" (${kind})` : `a ${kind}`;
     })
     .join(', ');
 }
 
 function typeText(c: ContractChannel): string {
-  return c.values ? `${c.type}, one of ${c.values.join(', ')}` : c.type === 'json' ? 'any value' : c.type;
+  const type = c.values ? `${c.type}, one of ${c.values.join(', ')}` : c.type === 'json' ? 'any value' : c.type;
+  return c.otherTypes ? `${type} (CLASH: also written as ${c.otherTypes.join(', ')}; fix the panel)` : type;
 }
 
 type Named = { channel: ContractChannel; constant: string; valueGroup?: string; values: { value: string; constant: string }[] };
@@ -180,7 +184,7 @@ export function contractJava(contract: ChannelContract, options: JavaOptions = {
   const lines: string[] = [];
   if (options.packageName) lines.push(`package ${options.packageName};`, '');
   lines.push(
-    `// Channel contract${options.panelName ? ` of the Pitwall panel ‘${commentText(options.panelName)}’` : ' of a Pitwall panel'} (${CHANNEL_CONTRACT_FORMAT} v${CHANNEL_CONTRACT_VERSION}).`,
+    `// Channel contract${options.panelName ? ` of the Pitwall panel "${commentText(options.panelName)}"` : ' of a Pitwall panel'} (${CHANNEL_CONTRACT_FORMAT} v${CHANNEL_CONTRACT_VERSION}).`,
     '// Made by Pitwall: paste it into the robot project and keep it in step with the panel.',
     '',
     `/** Channel names and allowed values shared by the operator panel and the robot code. */`,
@@ -223,7 +227,7 @@ export function contractPython(contract: ChannelContract, options: { panelName?:
   const used = new Set<string>(['Final']);
   const { reads, publishes } = codeChannels(contract);
   const lines: string[] = [
-    `"""Channel contract${options.panelName ? ` of the Pitwall panel ‘${commentText(options.panelName).replace(/"/g, "'")}’` : ' of a Pitwall panel'} (${CHANNEL_CONTRACT_FORMAT} v${CHANNEL_CONTRACT_VERSION}).`,
+    `"""Channel contract${options.panelName ? ` of the Pitwall panel '${commentText(options.panelName).replace(/"/g, "'")}'` : ' of a Pitwall panel'} (${CHANNEL_CONTRACT_FORMAT} v${CHANNEL_CONTRACT_VERSION}).`,
     '',
     'Made by Pitwall: paste it into the robot project and keep it in step with the panel.',
     '"""',
