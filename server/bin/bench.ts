@@ -1,6 +1,7 @@
 // `npm run bench`: benchmarks on a throw-away database of the embedded cluster (or DATABASE_URL's server).
 import pg from 'pg';
 import { benchAuth } from '../bench/auth.bench';
+import { benchCycles } from '../bench/cycles.bench';
 import { formatResults } from '../bench/bench-kit';
 import { benchRecordings } from '../bench/recordings.bench';
 import { benchRecordingsApi } from '../bench/recordings-api.bench';
@@ -39,6 +40,7 @@ try {
   } finally {
     await recordingsApi.server.stop();
   }
+  process.stdout.write(`\ncycles\n${(await benchCycles(handle.db, { databaseUrl: withDatabase(database.url, name) })).join('\n')}\n`);
 } finally {
   await handle.close();
   await admin.query(`drop database if exists ${name} with (force)`);
