@@ -6,7 +6,9 @@ import type { Page } from 'playwright-core';
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/features/demo/demo-team';
+import type { ServerMessage } from '../../shared/protocol/messages';
 import { SHOTS, signInAs, startBrowserStack, type BrowserStack } from '../support/e2e';
+import { relayUrl, sessionCookie, TestRelayClient } from '../support/relay-clients';
 
 let stack: BrowserStack;
 let quickDrillId: string;
@@ -32,9 +34,9 @@ afterAll(async () => {
 
 const chartPoints = (page: Page) => page.getByTestId('drill-results-chart').getAttribute('data-points').then(Number);
 
-async function storedRuns(): Promise<{ n: number; median: number | null }> {
-  const r = await stack.server.db.db.execute<{ n: number; median: number | null }>(
-    sql`select count(*)::int as n, max(median_ms) as median from drill_results where drill_id = ${quickDrillId}`,
+async function storedRuns(): Promise<{ n: number; median: number | null; simulated: boolean }> {
+  const r = await stack.server.db.db.execute<{ n: number; median: number | null; simulated: boolean }>(
+    sql`select count(*)::int as n, max(median_ms) as median, bool_and(is_simulator_driven) as simulated from drill_results where drill_id = ${quickDrillId}`,
   );
   return r.rows[0]!;
 }
@@ -51,6 +53,16 @@ describe('drills through the UI', () => {
     await page.getByRole('link', { name: 'Run Quick three' }).click();
     await expect.poll(() => page.url()).toContain(`/drills/${quickDrillId}/run`);
     await expect.poll(() => page.getByText('Answer on the team’s published panel').isVisible()).toBe(true);
+    // Each answer also goes to the standard channels, as the simulator reads them.
+    await page.getByRole('switch', { name: 'Drive the simulator' }).click();
+    await expect.poll(() => page.getByRole('complementary', { name: 'Safety' }).isVisible()).toBe(true);
+    const watcher = await TestRelayClient.connect(
+      relayUrl(stack.server),
+      { cookie: await sessionCookie(stack.server, 'viewer@harborlight.example', DEMO_PASSWORD), origin: stack.server.url },
+      'viewer',
+      'drill watcher',
+    );
+    watcher.send({ type: 'subscribe', prefixes: ['op/reef/'] });
     await page.getByRole('button', { name: 'Start drill' }).click();
 
     const call = page.getByTestId('drill-call');
@@ -63,6 +75,12 @@ describe('drills through the UI', () => {
     await canvas.getByRole('button', { name: 'Branch C' }).click();
     await canvas.getByRole('button', { name: /L4$/ }).first().click();
     await expect.poll(() => page.getByTestId('drill-status').textContent()).toMatch(/^Right in \d\.\d\d s · 1 wrong tap first$/);
+    const isValue = (channel: string, value: string) => (m: ServerMessage) => m.type === 'value' && m.channel === channel && m.value === value;
+    await watcher.next(isValue('op/reef/branch', 'C'));
+    await watcher.next(isValue('op/reef/level', 'L4'));
+    // The wrong tap stayed on the drill view: nothing but the answer reached the channels.
+    expect(watcher.messages.some(isValue('op/reef/branch', 'D'))).toBe(false);
+    watcher.stop();
 
     await expect.poll(() => call.textContent(), { timeout: 5000 }).toBe('Left station');
     await canvas.getByRole('button', { name: /Left$/ }).first().click();
@@ -76,6 +94,7 @@ describe('drills through the UI', () => {
     const stored = await storedRuns();
     expect(stored.n).toBe(1);
     expect(stored.median).toBeGreaterThan(0);
+    expect(stored.simulated).toBe(true);
     const rows = page.getByRole('table', { name: 'Each call of the run' }).locator('tbody tr');
     expect(await rows.count()).toBe(3);
     expect(await rows.nth(0).locator('td').nth(3).textContent()).toBe('1');

@@ -23,7 +23,19 @@ export function DrillList({ drills, canRun, canEdit, onEdit }: DrillListProps) {
         {drills.map((d) => (
           <li key={d.id} className="flex flex-col gap-3 rounded-tile bg-asphalt-850 p-4 ring-1 ring-asphalt-700" aria-label={d.name}>
             <div className="min-w-0">
-              <h3 className="truncate text-lg font-semibold text-asphalt-50">{d.name}</h3>
+              <div className="flex items-start gap-2">
+                <h3 className="min-w-0 flex-1 truncate pt-2 text-lg font-semibold text-asphalt-50">{d.name}</h3>
+                {canEdit && (
+                  <div className="-mr-2 flex shrink-0">
+                    <Button size="sm" variant="ghost" onClick={() => onEdit(d)} aria-label={`Edit ${d.name}`}>
+                      Edit
+                    </Button>
+                    <Button size="sm" variant="ghost" onClick={() => setDoomed(d)} aria-label={`Delete ${d.name}`}>
+                      Delete
+                    </Button>
+                  </div>
+                )}
+              </div>
               <p className="text-sm text-asphalt-300">{planSummary(d.plan)}</p>
               <p className="text-sm text-asphalt-400">
                 {paceSummary(d.pace)} · {d.resultCount} run{d.resultCount === 1 ? '' : 's'}
@@ -39,16 +51,6 @@ export function DrillList({ drills, canRun, canEdit, onEdit }: DrillListProps) {
                 <ButtonLink to={`/drills/${d.id}/send`} size="sm" aria-label={`Send calls of ${d.name}`}>
                   Send calls
                 </ButtonLink>
-              )}
-              {canEdit && (
-                <Button size="sm" variant="ghost" onClick={() => onEdit(d)} aria-label={`Edit ${d.name}`}>
-                  Edit
-                </Button>
-              )}
-              {canEdit && (
-                <Button size="sm" variant="ghost" onClick={() => setDoomed(d)} aria-label={`Delete ${d.name}`}>
-                  Delete
-                </Button>
               )}
             </div>
           </li>

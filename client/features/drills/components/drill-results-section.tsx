@@ -5,7 +5,7 @@ import { Loading } from '../../../components/ui/loading';
 import { QueryError } from '../../../components/ui/query-error';
 import { SelectField } from '../../../components/ui/select-field';
 import { useDrillResults, usePersonalBests } from '../api/drills';
-import { resultOperators } from '../model/results-series';
+import { defaultOperatorId, resultOperators } from '../model/results-series';
 import { BestsTable } from './bests-table';
 import { ResultsChart } from './results-chart';
 import { ResultsTable } from './results-table';
@@ -16,7 +16,7 @@ export function DrillResultsSection({ drills, myUserId }: { drills: readonly Dri
   const operators = useMemo(() => resultOperators(all.data?.results ?? []), [all.data]);
   const [chosenOperator, setOperatorId] = useState<string | null>(null);
   const [drillId, setDrillId] = useState('');
-  const operatorId = chosenOperator ?? (operators.some((o) => o.id === myUserId) ? myUserId : (operators[0]?.id ?? ''));
+  const operatorId = chosenOperator ?? defaultOperatorId(operators, myUserId);
   const filtered = useDrillResults({ operatorId: operatorId || undefined, drillId: drillId || undefined });
   const bests = usePersonalBests({ operatorId: operatorId || undefined, drillId: drillId || undefined });
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { DrillResult } from '../../../../shared/schemas/drill';
-import { resultColumns, resultOperators } from './results-series';
+import { defaultOperatorId, resultColumns, resultOperators } from './results-series';
 
 const result = (id: string, startedAt: string, medianMs: number | null, operator = { id: 'u-1', name: 'Tomas Reyes' }): DrillResult => ({
   id,
@@ -28,6 +28,16 @@ describe('resultColumns', () => {
 describe('resultOperators', () => {
   it('lists each operator once, by name', () => {
     const ops = resultOperators([result('a', '2025-03-02T00:00:00Z', 1), result('b', '2025-03-02T00:00:00Z', 1, { id: 'u-2', name: 'Priya Dunmore' }), result('c', '2025-03-02T00:00:00Z', 1)]);
-    expect(ops).toEqual([{ id: 'u-2', name: 'Priya Dunmore' }, { id: 'u-1', name: 'Tomas Reyes' }]);
+    expect(ops).toEqual([
+      { id: 'u-2', name: 'Priya Dunmore', runCount: 1, isOperatorRole: true },
+      { id: 'u-1', name: 'Tomas Reyes', runCount: 2, isOperatorRole: true },
+    ]);
+  });
+
+  it('opens on your own runs, else the operator with the most runs', () => {
+    const ops = resultOperators([result('a', '2025-03-02T00:00:00Z', 1), result('b', '2025-03-02T00:00:00Z', 1, { id: 'u-2', name: 'Priya Dunmore' }), result('c', '2025-03-02T00:00:00Z', 1)]);
+    expect(defaultOperatorId(ops, 'u-2')).toBe('u-2');
+    expect(defaultOperatorId(ops, 'coach')).toBe('u-1');
+    expect(defaultOperatorId([], 'coach')).toBe('');
   });
 });

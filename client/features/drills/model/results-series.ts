@@ -14,9 +14,22 @@ export function resultColumns(results: readonly DrillResult[]): ResultColumns {
   ];
 }
 
-/** The distinct operators of the results, by name. */
-export function resultOperators(results: readonly DrillResult[]): { id: string; name: string }[] {
-  const byId = new Map<string, string>();
-  for (const r of results) if (r.operator.id) byId.set(r.operator.id, r.operator.name);
-  return [...byId].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name));
+export type ResultOperator = { id: string; name: string; runCount: number; isOperatorRole: boolean };
+
+/** The distinct members who ran drills, by name, with how many runs each. */
+export function resultOperators(results: readonly DrillResult[]): ResultOperator[] {
+  const byId = new Map<string, ResultOperator>();
+  for (const r of results) {
+    if (!r.operator.id) continue;
+    const seen = byId.get(r.operator.id) ?? { id: r.operator.id, name: r.operator.name, runCount: 0, isOperatorRole: false };
+    byId.set(r.operator.id, { ...seen, name: r.operator.name, runCount: seen.runCount + 1, isOperatorRole: seen.isOperatorRole || r.operator.role === 'operator' });
+  }
+  return [...byId.values()].sort((a, b) => a.name.localeCompare(b.name));
+}
+
+/** Whose results the page opens on: your own if you have runs, else the operator with the most runs. */
+export function defaultOperatorId(operators: readonly ResultOperator[], myUserId: string): string {
+  if (operators.some((o) => o.id === myUserId)) return myUserId;
+  const ranked = [...operators].sort((a, b) => Number(b.isOperatorRole) - Number(a.isOperatorRole) || b.runCount - a.runCount);
+  return ranked[0]?.id ?? '';
 }
