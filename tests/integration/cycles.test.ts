@@ -11,7 +11,8 @@ import { DEMO_EVENT, DEMO_MATCHES, seedDemoRecordings } from '../../server/featu
 import { DEMO_MEMBERS, DEMO_PASSWORD } from '../../server/features/demo/demo-team';
 import { seedDemo } from '../../server/features/demo/seed';
 import { runHeadlessMatch } from '../../simulator/src/headless';
-import { encodeHeadlessMatch } from '../../simulator/src/match-file';
+import { encodeHeadlessMatch, headlessMatchRecords } from '../../simulator/src/match-file';
+import type { RobotEvent, TelemetryBatch } from '../../shared/protocol/messages';
 import { signUpTeam, startTestServer, type TestClient, type TestServer } from '../support/test-server';
 
 let server: TestServer;
@@ -58,6 +59,29 @@ describe('stored cycles', () => {
       group by r.id`);
     expect(new Set(stored.map((s) => s.id))).toEqual(new Set([...demoIds, otherRecordingId]));
     for (const s of stored) expect(s.n).toBeGreaterThan(10);
+  });
+
+  it('analyses a recording still being made without storing it, and stores its cycles once the app finishes it, as the recorder does', async () => {
+    const recordings = server.app.services.recordings;
+    const teamId = (await rows<{ id: string }>(sql`select id from teams where number = 91850`))[0]!.id;
+    const match = runHeadlessMatch({ seed: 11, season: season2025, robot: DEFAULT_ROBOT_PROFILE, alliance: 'blue' });
+    const messages = headlessMatchRecords(match).filter((r): r is TelemetryBatch | RobotEvent => r.type === 'telemetry_batch' || r.type === 'event');
+    const { recordingId } = await recordings.ingest(
+      { teamId, robot: 'Tern', robotKeyId: undefined, streamId: 'live-stream:1', signals: match.signals, kind: 'match', source: 'live' },
+      messages,
+    );
+    const live = recordingCyclesSchema.parse((await other.get(`/api/recordings/${recordingId}/cycles`).expect(200)).body);
+    expect(live.cycles.length).toBeGreaterThan(10);
+    const storedBefore = await rows<{ n: number }>(sql`select count(*)::int as n from recording_cycle_summaries where recording_id = ${recordingId}`);
+    expect(storedBefore[0]!.n).toBe(0);
+
+    await recordings.finish(teamId, recordingId);
+    const [summary] = await rows<{ cycle_count: number; total_points: number }>(sql`
+      select cycle_count, total_points from recording_cycle_summaries where recording_id = ${recordingId}`);
+    expect(summary).toEqual({ cycle_count: live.cycles.length, total_points: live.summary.points.total });
+    await other.delete(`/api/recordings/${recordingId}`).expect(204);
+    const left = await rows<{ n: number }>(sql`select count(*)::int as n from recording_cycles where recording_id = ${recordingId}`);
+    expect(left[0]!.n).toBe(0);
   });
 
   it('has varied cycles across the demo matches', async () => {

@@ -42,7 +42,7 @@ export function targetLabel(t: CycleTarget): string {
 
 /** A group key as a reader says it; null is a cycle without that attribute. */
 export function groupLabel(kind: 'level' | 'face' | 'station' | 'operator', key: string | null): string {
-  if (key === null) return kind === 'operator' ? 'No operator named' : 'Not known';
+  if (key === null) return kind === 'operator' ? 'No operator named' : kind === 'station' ? 'Preload or not known' : 'Not known';
   if (kind === 'face') return `Face ${key}`;
   if (kind === 'station') return STATION_LABELS[key] ?? key;
   return key;
