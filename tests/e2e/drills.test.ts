@@ -131,7 +131,7 @@ describe('drills through the UI', () => {
     await coach.screenshot({ path: path.join(SHOTS, 'drills-coach-console.png'), fullPage: true });
 
     await coach.getByRole('button', { name: 'Stop sending' }).click();
-    await expect.poll(() => operator.getByRole('heading', { name: /^Stopped after 2 of 3 calls$/ }).isVisible()).toBe(true);
+    await expect.poll(() => operator.getByRole('heading', { name: /^Stopped after 1 of 3 calls$/ }).isVisible()).toBe(true);
     await expect.poll(() => operator.getByTestId('drill-saved').isVisible(), { timeout: 10_000 }).toBe(true);
     const r = await stack.server.db.db.execute<{ mode: string; coach: string; complete: boolean }>(
       sql`select mode, coach_name as coach, is_complete as complete from drill_results where drill_id = ${quickDrillId} and mode = 'coached'`,

@@ -21,6 +21,7 @@ import {
   readyRun,
   scoredSoFar,
   startRun,
+  stopRun,
   tapRun,
   tickRun,
   windowOf,
@@ -157,7 +158,7 @@ export function DrillRunView({ mode, drill, panel, panelProblem, operatorName, c
     if (finishedKey) save();
   }, [finishedKey]);
 
-  const stop = () => setRun((s) => ({ ...tickRun(s, pageNowMs()), phase: 'finished', isStopped: true }));
+  const stop = () => setRun((s) => stopRun(s, pageNowMs()));
 
   const onTap = useCallback((part: CallPart, value: string) => setRun((s) => tapRun(s, part, value, pageNowMs())), []);
 

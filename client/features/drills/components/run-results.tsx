@@ -57,6 +57,7 @@ export function RunResults({ scored, count, isStopped, saved, isSaving, saveErro
             <Spinner className="size-4" /> Saving the result…
           </>
         )}
+        {calls.length === 0 && <span className="text-asphalt-400">No call was finished, so there is nothing to save.</span>}
         {saved && (
           <span className="text-go" data-testid="drill-saved">
             Saved to your results{isStopped ? ' (a stopped run does not count for personal bests)' : ''}.

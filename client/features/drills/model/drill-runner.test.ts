@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { coachCall, coachEnd, dueAtMs, missingParts, readyRun, scoredSoFar, startRun, tapRun, tickRun } from './drill-runner';
+import { coachCall, coachEnd, dueAtMs, missingParts, readyRun, scoredSoFar, startRun, stopRun, tapRun, tickRun } from './drill-runner';
 
 const calls = [{ branch: 'C', level: 'L4' }, { station: 'left' }] as const;
 
@@ -33,6 +33,16 @@ describe('a self-paced run at an interval', () => {
     expect(s.phase).toBe('closed');
   });
 
+  it('leaves out the call still open when stopped', () => {
+    let s = tickRun(startRun(readyRun({ mode: 'interval', intervalMs: 4000 }, [...calls]), 0, 1000), 1000);
+    s = tapRun(tapRun(s, 'branch', 'C', 1500), 'level', 'L4', 1900);
+    s = tickRun(s, 5000);
+    s = stopRun(tapRun(s, 'station', 'right', 5400), 5600);
+    expect(s).toMatchObject({ phase: 'finished', isStopped: true, outcome: null });
+    expect(s.records.map((r) => r.call)).toEqual([calls[0]]);
+    expect(stopRun(s, 9000)).toBe(s);
+  });
+
   it('ignores taps outside an open call', () => {
     const s = startRun(readyRun({ mode: 'interval', intervalMs: 2000 }, [...calls]), 0);
     expect(tapRun(s, 'branch', 'C', 100)).toBe(s);
@@ -63,6 +73,15 @@ describe('a coached run', () => {
     s = coachEnd(s, 'session-a1', false, 53_000);
     expect(s.phase).toBe('finished');
     expect(scoredSoFar(s).map((c) => c.isMiss)).toEqual([true, false]);
+  });
+
+  it('leaves out the open call when the coach stops', () => {
+    let s = coachCall(readyRun({ mode: 'coached', windowMs: 4000 }), 'session-a1', 0, { level: 'L1' }, 4000, 0);
+    s = tapRun(s, 'level', 'L1', 500);
+    s = coachCall(s, 'session-a1', 1, { level: 'L2' }, 4000, 1000);
+    s = coachEnd(s, 'session-a1', true, 1500);
+    expect(s).toMatchObject({ phase: 'finished', isStopped: true });
+    expect(s.records.map((r) => r.call)).toEqual([{ level: 'L1' }]);
   });
 
   it('starts over when a new session begins, and ignores the end of another session', () => {

@@ -122,9 +122,19 @@ export function coachCall(state: RunnerState, sessionId: string, index: number, 
   return show({ ...s, calls: [...s.calls, call] }, call, atMs);
 }
 
-/** The coach ended the session: the open call is closed and the run is finished. */
+/** Stopped before the end: a call still open is left out (it was never finished), and the run is over. */
+export function stopRun(state: RunnerState, atMs: number): RunnerState {
+  if (state.phase === 'ready' || state.phase === 'finished') return state;
+  const s = tickRun(state, atMs);
+  if (s.phase === 'finished') return s;
+  const records = s.phase === 'open' ? s.records.slice(0, -1) : s.records;
+  return { ...s, phase: 'finished', isStopped: true, records, outcome: s.phase === 'open' ? null : s.outcome };
+}
+
+/** The coach ended the session: after the last call the open call is closed and scored; a stop leaves it out. */
 export function coachEnd(state: RunnerState, sessionId: string, isStopped: boolean, atMs: number): RunnerState {
   if (state.sessionId !== sessionId || state.phase === 'finished' || state.phase === 'ready') return state;
+  if (isStopped) return stopRun(state, atMs);
   return { ...close(state, atMs), phase: 'finished', isStopped };
 }
 
