@@ -42,6 +42,15 @@ describe('cycles through the UI', () => {
     await expect.poll(() => perMatch.getByRole('row').count()).toBe(13);
     await page.screenshot({ path: path.join(SHOTS, 'cycles-review.png'), fullPage: true });
 
+    // A filter nothing matches says so, and Clear filters brings the review back.
+    await page.getByLabel('Kind', { exact: true }).selectOption('match');
+    await page.getByText('No recording matches these filters').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'cycles-review-empty.png') });
+    await page.getByRole('button', { name: 'Clear filters' }).last().click();
+    await expect.poll(() => new URL(page.url()).search).toBe('');
+    await page.getByLabel('Event', { exact: true }).selectOption(DEMO_EVENT);
+    await expect.poll(() => perMatch.getByRole('row').count()).toBe(13);
+
     // Saturday only: the address keeps the filter and the page shows the six matches of that day.
     await page.getByLabel('From', { exact: true }).fill('2025-03-15');
     await expect.poll(() => new URL(page.url()).searchParams.get('from')).toBe('2025-03-15');
@@ -58,6 +67,16 @@ describe('cycles through the UI', () => {
     expect(new URL(page.url()).pathname).toBe(`/recordings/${slowest.recordingId}`);
     expect(await cursorSeconds(page)).toBeCloseTo(slowest.startS, 1);
     await page.screenshot({ path: path.join(SHOTS, 'cycles-slowest-in-replay.png') });
+  });
+
+  it('fits the review on a tablet held upright', async () => {
+    const page = await signInAs(stack, 'coach', { width: 820, height: 1180 });
+    await page.goto(`${stack.server.url}/cycles?${new URLSearchParams({ event: DEMO_EVENT })}`);
+    await page.locator('[data-trend-chart] canvas').waitFor();
+    await page.getByRole('table', { name: 'Slowest cycles' }).waitFor();
+    const overflowPx = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflowPx).toBeLessThanOrEqual(0);
+    await page.screenshot({ path: path.join(SHOTS, 'cycles-review-tablet.png') });
   });
 
   it('shows the cycles view on a replay page, and a picked cycle moves the timeline to its start', async () => {

@@ -37,7 +37,7 @@ export function CyclesTable({ cycles, currentIndex, onPick }: CyclesTableProps) 
           <td className="px-2 py-1.5">
             <button
               type="button"
-              className="num min-h-11 min-w-11 rounded-md px-2 font-semibold text-signal-300 underline-offset-2 hover:underline focus-visible:outline-2 focus-visible:outline-signal-400"
+              className="num min-h-11 min-w-11 rounded-md px-1 font-semibold text-signal-300 underline-offset-2 hover:underline focus-visible:outline-2 focus-visible:outline-signal-400"
               aria-label={`Go to cycle ${c.index + 1} at ${formatClock(c.startS)}`}
               onClick={(e) => {
                 e.stopPropagation();
@@ -49,11 +49,11 @@ export function CyclesTable({ cycles, currentIndex, onPick }: CyclesTableProps) 
           </td>
           <td className="px-2 py-1.5">
             <span className="capitalize">{c.piece}</span>
-            <span className="ml-1 text-xs text-asphalt-400">{c.isPreload ? 'preload' : c.station === 'reef' ? 'from reef' : c.station ? `${c.station} station` : ''}</span>
+            <span className="block text-xs text-asphalt-400">{c.isPreload ? 'preload' : c.station === 'reef' ? 'from reef' : c.station ? `${c.station} station` : ''}</span>
           </td>
           <td className="num px-2 py-1.5 whitespace-nowrap">
             {formatClock(c.startS)}
-            <span className="ml-1 text-xs text-asphalt-500" title={c.crossesPhase ? 'Started in auto, placed in teleop' : undefined}>
+            <span className="block text-xs text-asphalt-500" title={c.crossesPhase ? 'Started in auto, placed in teleop' : undefined}>
               {c.crossesPhase ? 'auto → teleop' : c.phase}
             </span>
           </td>
