@@ -6,7 +6,7 @@
 // up the safety caution.
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/features/demo/demo-team';
 import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
 import { season2025 } from '../../shared/domain/season/season-2025';
@@ -38,6 +38,10 @@ beforeAll(async () => {
   const cookie = await sessionCookie(server, 'programmer@harborlight.example', DEMO_PASSWORD);
   watcher = await TestRelayClient.connect(relayUrl(server), { cookie, origin: server.url }, 'viewer', 'test watcher');
   watcher.send({ type: 'subscribe', prefixes: ['op/', 'robot/'] });
+});
+// A failed step leaves a picture of the tablet behind.
+afterEach(async (ctx) => {
+  if (ctx.task.result?.state === 'fail' && page && !page.isClosed()) await page.screenshot({ path: path.join(SHOTS, `run-failed-${ctx.task.name.slice(0, 40).replace(/\W+/g, '-')}.png`) }).catch(() => {});
 });
 afterAll(async () => {
   watcher?.stop();
@@ -90,6 +94,37 @@ describe('run mode', () => {
     }));
     expect(lock).toMatchObject({ overflow: 'hidden', touchAction: 'none', userSelect: 'none', scrolls: false });
     expect(lock.viewport).toContain('user-scalable=no');
+  });
+
+  it('turns the reef to the seat chosen at run time and remembers the seat on the tablet', async () => {
+    const nearFace = () => page.locator('[data-tile-kind="reef-picker"] [data-near-face]').textContent();
+    expect(await nearFace()).toBe('A/B');
+    await page.getByRole('button', { name: /^Seat: Blue 1/ }).click();
+    const dialog = page.getByRole('dialog', { name: 'Seat and settings' });
+    await dialog.getByRole('button', { name: 'Red' }).click();
+    await dialog.getByRole('button', { name: '3' }).click();
+    await page.getByRole('button', { name: /^Seat: Red 3/ }).waitFor();
+    await page.locator('[data-tile-kind="reef-picker"] svg[data-alliance="red"]').waitFor();
+    // From red station 3 the near face of the red reef is another pair than A/B of the blue one.
+    const redNear = await nearFace();
+    expect(redNear).toMatch(/^[A-L]\/[A-L]$/);
+    await shot('run-operator-seat-chooser.png');
+    await page.reload();
+    await page.getByRole('button', { name: /^Seat: Red 3/ }).waitFor();
+    expect(await nearFace()).toBe(redNear);
+    await page.getByRole('button', { name: /^Seat: Red 3/ }).click();
+    await dialog.getByRole('button', { name: 'Blue' }).click();
+    await dialog.getByRole('button', { name: '1' }).click();
+    await page.keyboard.press('Escape');
+    await page.getByRole('button', { name: /^Seat: Blue 1/ }).waitFor();
+  });
+
+  it('asks to turn the tablet when it is held in portrait', async () => {
+    await page.setViewportSize({ width: 800, height: 1280 });
+    await page.getByRole('alert').getByText('Turn the tablet to landscape').waitFor();
+    await shot('run-operator-portrait.png');
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await expect.poll(() => page.getByText('Turn the tablet to landscape').count()).toBe(0);
   });
 
   it('sends a tapped branch and level to the simulator, which acknowledges them and drives to the branch', async () => {
@@ -157,6 +192,20 @@ describe('run mode', () => {
     await page.context().setOffline(false);
     isCablePulled = false;
     await relayPill().getByText('Relay connected').waitFor({ timeout: 10_000 });
+  });
+
+  it('runs an unpublished panel at /panels/:id/run for a programmer, marked as a draft', async () => {
+    const programmer = await stack.server.client();
+    await programmer.post('/api/auth/sign-in').send({ email: 'programmer@harborlight.example', password: DEMO_PASSWORD }).expect(200);
+    const list = (await programmer.get('/api/panels').expect(200)).body as { panels: { id: string; name: string; publishedVersion: unknown }[] };
+    const draft = list.panels.find((p) => p.publishedVersion === null)!;
+    const p = await signInAs(stack, 'programmer');
+    await p.goto(`${stack.server.url}/panels/${draft.id}/run`);
+    await p.getByText(draft.name).waitFor();
+    await p.getByText('draft', { exact: true }).waitFor();
+    await p.locator('[data-testid="run-canvas"]').waitFor();
+    await p.screenshot({ path: path.join(SHOTS, 'run-programmer-draft.png') });
+    await p.context().close();
   });
 
   it('asks for the safety caution before the panel goes live to a robot that is not the simulator', async () => {

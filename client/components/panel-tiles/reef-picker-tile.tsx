@@ -72,6 +72,7 @@ export function ReefPickerTile({ tile, theme, season, seat, isDesign, canWrite, 
                   dominantBaseline="central"
                   fill={f.isNear ? theme.text : theme.muted}
                   fontWeight={f.isNear ? 700 : 500}
+                  data-near-face={f.isNear || undefined}
                   className="pointer-events-none"
                 >
                   {f.label}
