@@ -103,11 +103,13 @@ function reviewFilter(teamId: string, f: ReviewFilters): SQL | undefined {
 
 export function cyclesRepo(db: Executor) {
   return {
-    async findRecording(teamId: string, recordingId: string) {
-      const [row] = await db
+    /** The team's recording; with `lock`, held until the transaction ends, so two analyses of it store one after the other. */
+    async findRecording(teamId: string, recordingId: string, lock = false) {
+      const query = db
         .select({ id: recordings.id, status: recordings.status })
         .from(recordings)
         .where(and(eq(recordings.teamId, teamId), eq(recordings.id, recordingId)));
+      const [row] = lock ? await query.for('update') : await query;
       return row;
     },
 

@@ -50,7 +50,7 @@ export function createCyclesService({ store, recordings, now, season = season202
     const result = await analyse(row);
     await store.transaction(async (repo) => {
       // The recording may have been deleted meanwhile; then there is nothing to store under it.
-      if (await repo.findRecording(teamId, recordingId)) await repo.replace(recordingId, teamId, result);
+      if (await repo.findRecording(teamId, recordingId, true)) await repo.replace(recordingId, teamId, result);
     });
     return result;
   }
