@@ -174,4 +174,25 @@ describe('drills through the UI', () => {
     ]);
     await page.context().close();
   });
+
+  it('falls back to standard pickers, and says so, when the team has no published panel', async () => {
+    // Last in this file: it takes the team's published panel away.
+    await stack.server.db.db.execute(sql`delete from team_published_panels`);
+    const page = await signInAs(stack, 'operator', { width: 1024, height: 768 });
+    await page.goto(`${stack.server.url}/drills/${quickDrillId}/run`);
+    await expect.poll(() => page.getByText('Standard pickers instead of the published panel').isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('The team has no published panel yet.').isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Start drill' }).click();
+    await expect.poll(() => page.getByTestId('drill-call').textContent(), { timeout: 8000 }).toBe('L4 · C');
+    expect(await page.getByTestId('drill-panel-canvas').count()).toBe(0);
+    await page.getByRole('button', { name: 'Level L4' }).click();
+    await page.getByRole('button', { name: 'Branch C' }).click();
+    await expect.poll(() => page.getByTestId('drill-status').textContent()).toMatch(/^Right in \d\.\d\d s$/);
+    await expect.poll(() => page.getByTestId('drill-call').textContent(), { timeout: 5000 }).toBe('Left station');
+    await page.screenshot({ path: path.join(SHOTS, 'drills-run-standard-pickers.png') });
+    await page.getByRole('button', { name: 'Stop' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'Stopped after 1 of 3 calls' }).isVisible()).toBe(true);
+    await expect.poll(() => page.getByTestId('drill-saved').isVisible(), { timeout: 10_000 }).toBe(true);
+    await page.context().close();
+  });
 });

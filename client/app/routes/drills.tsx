@@ -122,6 +122,7 @@ export function RunComponent() {
   const panel = usePublishedPanel();
   const redirect = useSignInRedirect(me.error ?? drill.error);
   if (redirect) return redirect;
+  // The panel's query key lies outside ['drills'], so storing a result never puts it back to pending under a run.
   if (me.isPending || drill.isPending || panel.isPending) return <RunMessage isBusy title="Opening the drill…" backHref="/drills" />;
   if (drill.isError || !me.data)
     return (

@@ -26,7 +26,8 @@ export const drillKeys = {
   one: (id: string) => ['drills', 'one', id] as const,
   results: (f: ResultFilter) => ['drills', 'results', filterSearch(f)] as const,
   bests: (f: ResultFilter) => ['drills', 'bests', filterSearch(f)] as const,
-  publishedPanel: ['drills', 'published-panel'] as const,
+  /** Outside ['drills'] so that storing a result does not reload the panel under a running drill view. */
+  publishedPanel: ['published-panel', 'drill-view'] as const,
 };
 
 export const listDrills = () => api.get('/drills', drillListSchema);
