@@ -10,6 +10,7 @@ import { Notice } from '../../../components/ui/notice';
 import { useSubmitDrillResult } from '../api/drills';
 import { pageNowMs, useDueTick } from '../hooks/use-due-tick';
 import { useDrillCallEntry, usePublish, useRelayOffsetMs, useRelayStatus, useRobotPresence } from '../hooks/use-drill-relay';
+import { useFullScreen } from '../hooks/use-full-screen';
 import { useSpeech } from '../hooks/use-speech';
 import { drillPage } from '../model/drill-panel';
 import {
@@ -57,6 +58,7 @@ export function DrillRunView({ mode, drill, panel, panelProblem, operatorName, c
   const [drivesSimulator, setDrivesSimulator] = useState(false);
   const [coach, setCoach] = useState<{ drillId: string; drillName: string; coachName: string; count: number } | null>(null);
   const speech = useSpeech();
+  const fullScreen = useFullScreen();
   const publish = usePublish();
   const relayStatus = useRelayStatus();
   const robot = useRobotPresence();
@@ -198,6 +200,11 @@ export function DrillRunView({ mode, drill, panel, panelProblem, operatorName, c
             isDisabled={!canDriveSimulator}
             onChange={setDrivesSimulator}
           />
+          {fullScreen.isSupported && (
+            <Button variant="ghost" size="sm" onClick={fullScreen.toggle}>
+              {fullScreen.isOn ? 'Leave full screen' : 'Full screen'}
+            </Button>
+          )}
           {isRunning && mode === 'self' && (
             <Button variant="danger" size="sm" onClick={stop}>
               Stop
