@@ -23,6 +23,8 @@ const RING_GAP_M = 0.14;
 const SECTOR_GAP_DEG = 1.6;
 const LETTER_M = 0.4;
 const FACE_LABEL_M = 0.17;
+/** Long labels ("10 o'clock", "near right") shrink to about this width so they stay clear of the branches. */
+const FACE_LABEL_WIDTH_M = 0.72;
 
 /**
  * The alliance's real reef (hexagon and branch positions from the season profile), turned to the operator's
@@ -61,13 +63,13 @@ export function ReefPickerTile({ tile, theme, season, seat, isDesign, canWrite, 
             />
             {layout.faces.map((f) => {
               const rad = (f.normalDeg * Math.PI) / 180;
-              const r = season!.reefs[layout.alliance].centreToFaceM.value * 0.62;
+              const r = season!.reefs[layout.alliance].centreToFaceM.value * (f.label.length > 4 ? 0.56 : 0.62);
               return (
                 <text
                   key={f.faceIndex}
                   x={r * Math.cos(rad)}
                   y={-r * Math.sin(rad)}
-                  fontSize={FACE_LABEL_M}
+                  fontSize={Math.min(FACE_LABEL_M, FACE_LABEL_WIDTH_M / (0.55 * f.label.length))}
                   textAnchor="middle"
                   dominantBaseline="central"
                   fill={f.isNear ? theme.text : theme.muted}

@@ -28,7 +28,9 @@ export function TargetEchoTile({ tile, theme, isDesign, channels }: TargetEchoTi
   const chosen = parts.filter((p) => p.live?.value !== undefined);
   const allAcked = chosen.length > 0 && chosen.every((p) => p.live?.phase === 'acked');
   const worst = chosen.find((p) => p.live?.phase === 'lost' || p.live?.phase === 'refused') ?? chosen.find((p) => p.live?.phase === 'stale') ?? chosen.find((p) => p.live?.phase === 'pending');
-  const summary = allAcked ? chosen.reduce((a, p) => ({ ...a, roundTripMs: Math.max(a.roundTripMs ?? 0, p.live?.roundTripMs ?? 0) }), { phase: 'acked' as const, roundTripMs: undefined as number | undefined }) : worst?.live;
+  // All parts acknowledged: the slowest round trip among those measured here (a retained value has none).
+  const tripsMs = chosen.map((p) => p.live?.roundTripMs).filter((ms): ms is number => ms !== undefined);
+  const summary: ChannelLive | undefined = allAcked ? { phase: 'acked', ...(tripsMs.length > 0 ? { roundTripMs: Math.max(...tripsMs) } : {}) } : worst?.live;
   return (
     <>
       <TileHeading label={tile.label} ink={theme[tile.ink]} aside={isDesign || chosen.length === 0 ? undefined : <PhaseChip live={summary} theme={theme} size="large" />} />
