@@ -17,18 +17,21 @@ import { signInDemo, startBenchServer } from './bench-server';
 const REVIEW_RECORDINGS = 200;
 const REVIEW_RUNS = 60;
 
-/** p50 and p95 of client-observed times of `runs` calls after a warm-up of 5. */
-async function timeCalls(runs: number, call: () => Promise<void>): Promise<{ p50Ms: number; p95Ms: number }> {
+type CallTimes = { p50Ms: number; p95Ms: number; serverP50Ms: number | null };
+
+/** p50 and p95 of client-observed times of `runs` calls after a warm-up of 5, and the p50 of the server's own time. */
+async function timeCalls(runs: number, call: () => Promise<number | null>): Promise<CallTimes> {
   for (let i = 0; i < 5; i += 1) await call();
   const times: number[] = [];
+  const server: number[] = [];
   for (let i = 0; i < runs; i += 1) {
     const t0 = performance.now();
-    await call();
+    const serverMs = await call();
     times.push(performance.now() - t0);
+    if (serverMs !== null) server.push(serverMs);
   }
-  times.sort((a, b) => a - b);
-  const at = (q: number) => times[Math.min(times.length - 1, Math.floor(q * times.length))]!;
-  return { p50Ms: at(0.5), p95Ms: at(0.95) };
+  const at = (xs: number[], q: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(q * xs.length))]!;
+  return { p50Ms: at(times, 0.5), p95Ms: at(times, 0.95), serverP50Ms: server.length === runs ? at(server, 0.5) : null };
 }
 
 /** The headless simulator's match as the analysis reads it: events with selections, and the drive speed. */
@@ -121,13 +124,17 @@ export async function benchCycles(db: Db, options: { databaseUrl: string }): Pro
       const res = await fetch(`${server.url}${path}`, { headers: { cookie: coach.cookie } });
       if (!res.ok) throw new Error(`cycles bench: ${path} answered ${res.status}`);
       await res.arrayBuffer();
+      const timing = /dur=([\d.]+)/.exec(res.headers.get('server-timing') ?? '');
+      return timing ? Number(timing[1]) : null;
     };
     const query = new URLSearchParams({ event: DEMO_EVENT }).toString();
     const health = await timeCalls(REVIEW_RUNS, get('/api/health'));
     const review = await timeCalls(REVIEW_RUNS, get(`/api/review/cycles?${query}`));
     const csv = await timeCalls(REVIEW_RUNS, get(`/api/review/cycles?${query}&format=csv`));
-    const row = (name: string, t: { p50Ms: number; p95Ms: number }, isBaseline = false) =>
-      `  ${name.padEnd(46)} p50 ${t.p50Ms.toFixed(2).padStart(8)} ms   p95 ${t.p95Ms.toFixed(2).padStart(8)} ms   ${isBaseline ? 'baseline' : `${(t.p50Ms / health.p50Ms).toFixed(1)}× baseline`}`;
+    const row = (name: string, t: CallTimes, isBaseline = false) =>
+      `  ${name.padEnd(46)} p50 ${t.p50Ms.toFixed(2).padStart(8)} ms   p95 ${t.p95Ms.toFixed(2).padStart(8)} ms   ` +
+      `${isBaseline ? 'baseline' : `${(t.p50Ms / health.p50Ms).toFixed(1)}× baseline`}` +
+      (t.serverP50Ms === null ? '' : `   (server p50 ${t.serverP50Ms.toFixed(2)} ms)`);
     lines.push(`  review over ${recordings} recordings, ${n} cycles (target ≤ 300 ms), ${REVIEW_RUNS} calls each, client-observed`);
     lines.push(row('baseline: GET /api/health', health, true));
     lines.push(row('GET /api/review/cycles', review));

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { cycleReviewSchema, recordingCyclesSchema, reviewQuerySchema } from '../../../shared/schemas/cycle';
 import { recordingParamsSchema } from '../../../shared/schemas/recording';
 import type { Db } from '../../db/client';
+import { setServerTiming } from '../../lib/server-timing';
 import { actorOf, requireAction } from '../auth/session.middleware';
 import { cyclesServiceFor, type CyclesService } from './cycles.service';
 
@@ -21,10 +22,13 @@ export function cyclesRouter(deps: { db: Db; now?: () => Date; cycles?: CyclesSe
       const csv = await cycles.reviewCsv(actorOf(req), filters);
       res.setHeader('Content-Type', 'text/csv; charset=utf-8');
       res.setHeader('Content-Disposition', 'attachment; filename="pitwall-cycles.csv"');
+      setServerTiming(res);
       res.send(csv);
       return;
     }
-    res.json(cycleReviewSchema.parse(await cycles.review(actorOf(req), filters)));
+    const review = cycleReviewSchema.parse(await cycles.review(actorOf(req), filters));
+    setServerTiming(res);
+    res.json(review);
   });
 
   return router;
