@@ -25,7 +25,18 @@ export function ResultsChart({ results }: { results: readonly DrillResult[] }) {
       cursor: { drag: { x: false, y: false } },
       scales: { x: { time: true }, s: { auto: true, range: (_u, min, max) => [0, Math.max(1, Math.ceil((max ?? min) * 1.15 * 2) / 2)] } },
       axes: [
-        { ...AXIS },
+        {
+          ...AXIS,
+          space: 70,
+          // Runs are hours or days apart: ticks of whole hours at the finest, labelled by day.
+          incrs: [3600, 6 * 3600, 86_400, 2 * 86_400, 7 * 86_400, 14 * 86_400, 30 * 86_400],
+          values: (_u, ticks, _axis, _space, incrS) =>
+            ticks.map((t) => {
+              const d = new Date(t * 1000);
+              const day = d.toLocaleDateString(undefined, { month: 'short', day: 'numeric' });
+              return incrS < 86_400 ? `${day} ${d.toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' })}` : day;
+            }),
+        },
         { ...AXIS, scale: 's', size: 52, values: (_u, ticks) => ticks.map((t) => `${t.toFixed(1)} s`) },
       ],
       series: [
