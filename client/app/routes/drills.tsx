@@ -111,6 +111,7 @@ function useSignInRedirect(error: unknown) {
 function panelProblemOf(error: unknown): string | null {
   if (!error) return null;
   if (isApiError(error) && error.status === 404) return 'The team has no published panel yet.';
+  if (isApiError(error) && error.status === 403) return 'Only operators, programmers and leads open the published panel.';
   return 'The published panel could not be loaded.';
 }
 
