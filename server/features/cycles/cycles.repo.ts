@@ -202,21 +202,17 @@ export function cyclesRepo(db: Executor) {
 
     /** Events and operators named on the team's analysed recordings, for the filter choices. */
     async reviewOptions(teamId: string): Promise<{ events: string[]; operators: string[] }> {
-      const [events, operators] = await Promise.all([
-        db
-          .selectDistinct({ value: recordings.event })
+      const namesIn = async (column: typeof recordings.event | typeof recordings.operatorName) => {
+        const rows = await db
+          .selectDistinct({ value: column })
           .from(recordingCycleSummaries)
           .innerJoin(recordings, eq(recordings.id, recordingCycleSummaries.recordingId))
-          .where(and(eq(recordings.teamId, teamId), isNotNull(recordings.event)))
-          .orderBy(asc(recordings.event)),
-        db
-          .selectDistinct({ value: recordings.operatorName })
-          .from(recordingCycleSummaries)
-          .innerJoin(recordings, eq(recordings.id, recordingCycleSummaries.recordingId))
-          .where(and(eq(recordings.teamId, teamId), isNotNull(recordings.operatorName)))
-          .orderBy(asc(recordings.operatorName)),
-      ]);
-      return { events: events.map((r) => r.value!), operators: operators.map((r) => r.value!) };
+          .where(and(eq(recordings.teamId, teamId), isNotNull(column)))
+          .orderBy(asc(column));
+        return rows.flatMap((r) => (r.value === null ? [] : [r.value]));
+      };
+      const [events, operators] = await Promise.all([namesIn(recordings.event), namesIn(recordings.operatorName)]);
+      return { events, operators };
     },
   };
 }

@@ -61,10 +61,17 @@ interface Taps {
   algae?: { value: string; tS: number };
 }
 
-const str = (data: CycleEvent['data'], key: string): string | null => {
+/** A string field of an event's data, or null when it is missing or not a string. */
+export const str = (data: CycleEvent['data'], key: string): string | null => {
   const v = data?.[key];
   return typeof v === 'string' ? v : null;
 };
+
+/** The phase an event counts in: the mode at its time, else its own `phase` field, else teleop. */
+export function phaseOfEvent(phaseAt: (tS: number) => CyclePhase | null, tS: number, data: CycleEvent['data']): CyclePhase {
+  const fromData = str(data, 'phase');
+  return phaseAt(tS) ?? (fromData === 'auto' || fromData === 'teleop' ? fromData : 'teleop');
+}
 const branchOf = (v: string | null | undefined) => branchLetterSchema.safeParse(v).data ?? null;
 const levelOf = (v: string | null | undefined) => reefLevelSchema.safeParse(v).data ?? null;
 const algaeOf = (v: string | null | undefined) => algaeTargetSchema.safeParse(v).data ?? null;
@@ -153,10 +160,6 @@ export function analyzeCycles(season: SeasonProfile, input: CycleInput, options:
   let mode: string | null = null;
   let pausedAfterAutoS: number | null = null;
 
-  const phaseFor = (tS: number, data: CycleEvent['data']): CyclePhase => {
-    const fromData = str(data, 'phase');
-    return phaseAt(tS) ?? (fromData === 'auto' || fromData === 'teleop' ? fromData : 'teleop');
-  };
 
   function openCycle(piece: CyclePiece, tS: number, station: string | null, isPreload: boolean): OpenCycle {
     const cycle = { piece, startS: Math.min(freeS ?? tS, tS), acquiredS: tS, station, isPreload };
@@ -166,7 +169,7 @@ export function analyzeCycles(season: SeasonProfile, input: CycleInput, options:
 
   function close(c: OpenCycle, endS: number, outcome: CycleOutcome, endedBy: CycleEndCause, data: CycleEvent['data']) {
     open.delete(c.piece);
-    const phase = phaseFor(endS, data);
+    const phase = phaseOfEvent(phaseAt, endS, data);
     const startPhase = phaseAt(c.startS) ?? phase;
     const isAttempt = outcome === 'scored' || outcome === 'missed';
     const called: CycleTarget =

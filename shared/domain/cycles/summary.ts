@@ -2,21 +2,13 @@
 import type { Cycle, MatchSummary } from '../../schemas/cycle';
 import { bargeStateSchema, rankingPointProgress, scoreEvents, type ScoringEvent, type ScoringPhase } from '../season/points';
 import { reefLevelSchema, type SeasonProfile } from '../season/season-profile';
-import { phaseTimeline, type CycleEvent } from './analyze';
+import { phaseOfEvent, phaseTimeline, str, type CycleEvent } from './analyze';
 import { durationStats } from './stats';
-
-const str = (data: CycleEvent['data'], key: string): string | null => {
-  const v = data?.[key];
-  return typeof v === 'string' ? v : null;
-};
 
 /** The season's scoring events of this robot: leave, coral placed, algae scored and the barge state at the end. */
 export function scoringEvents(events: readonly CycleEvent[]): (ScoringEvent & { tS: number })[] {
   const phaseAt = phaseTimeline(events);
-  const phaseFor = (e: CycleEvent): ScoringPhase => {
-    const fromData = str(e.data, 'phase');
-    return phaseAt(e.tS) ?? (fromData === 'auto' || fromData === 'teleop' ? fromData : 'teleop');
-  };
+  const phaseFor = (e: CycleEvent): ScoringPhase => phaseOfEvent(phaseAt, e.tS, e.data);
   const out: (ScoringEvent & { tS: number })[] = [];
   for (const e of events) {
     if (e.kind === 'leave') out.push({ kind: 'leave', tS: e.tS });
