@@ -135,10 +135,11 @@ describe('run mode', () => {
     const poseAtTap = { ...sim!.model.pose };
     await page.getByRole('button', { name: `Branch ${branch}` }).click();
     await page.getByRole('button', { name: 'Level L3' }).click();
+    // The page paints a tap's state on the next frame, so wait for both parts by value, then the summary.
+    await echo().locator('[data-channel="op/reef/branch"][data-phase="acked"]').getByText(branch).waitFor();
+    await echo().locator('[data-channel="op/reef/level"][data-phase="acked"]').getByText('L3').waitFor();
     await echo().getByText(/Robot has it · \d+ ms/).waitFor();
     expect(await page.getByRole('button', { name: `Branch ${branch}` }).getAttribute('aria-pressed')).toBe('true');
-    expect(await echo().locator('[data-channel="op/reef/branch"]').getAttribute('data-phase')).toBe('acked');
-    expect(await echo().locator('[data-channel="op/reef/level"]').getAttribute('data-phase')).toBe('acked');
     await shot('run-operator-acked.png');
 
     // Through the relay: the tablet's values, the simulator's acks, and its retained robot/target.
@@ -157,6 +158,17 @@ describe('run mode', () => {
       return closestM < Math.max(0.15, startM - 0.5);
     }, 8000);
     expect(closestM).toBeLessThan(startM);
+  });
+
+  it('takes a selection from the keyboard as from a tap (Enter or Space on a focused button)', async () => {
+    await page.getByRole('button', { name: 'Level L2' }).focus();
+    await page.keyboard.press('Space');
+    await until(() => sim!.model.selection.level === 'L2');
+    expect(await page.getByRole('button', { name: 'Level L2' }).getAttribute('aria-pressed')).toBe('true');
+    await page.getByRole('button', { name: 'Branch K' }).focus();
+    await page.keyboard.press('Enter');
+    await until(() => sim!.model.selection.branch === 'K');
+    await echo().locator('[data-channel="op/reef/branch"][data-phase="acked"]').getByText('K').waitFor();
   });
 
   it('shows the lost relay link, keeps a tap made meanwhile, and re-sends the selection when the link is back', async () => {

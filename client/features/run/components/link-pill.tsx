@@ -30,7 +30,7 @@ export function LinkPill({ name, words, tone, theme, detail }: LinkPillProps) {
       style={isCalm ? { color: colour, boxShadow: `inset 0 0 0 2px ${colour}` } : { background: colour, color: theme.canvas }}
     >
       <span aria-hidden="true">{MARKS[tone]}</span>
-      {words}
+      <span className="max-w-[20rem] truncate">{words}</span>
     </span>
   );
 }
