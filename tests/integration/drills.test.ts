@@ -1,6 +1,8 @@
 import { sql } from 'drizzle-orm';
 import { median, quantile } from 'simple-statistics';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { seededRandom } from '../../shared/domain/drills/drill-calls';
+import { planCalls } from '../../shared/domain/drills/drill-plan';
 import { ROLES, type Role } from '../../shared/domain/roles';
 import {
   drillListSchema,
@@ -214,6 +216,20 @@ describe('drill results', () => {
     expect(res.body.error.issues[0].path).toBe('calls.0.call');
     const ok: DrillResultBody = { ...body, calls: [{ call: { branch: 'G', level: 'L3' }, shownAtMs: 0, taps: [tap('level', 'L3', 400), tap('branch', 'G', 700)] }] };
     expect((await clients.operator.post('/api/drills/results').send(ok).expect(201)).body.stats.medianMs).toBe(700);
+  });
+
+  it('checks a random run against the calls its seed draws', async () => {
+    const drill = (await clients.lead.post('/api/drills').send(random).expect(201)).body;
+    const drawn = planCalls(drill.plan, seededRandom(4242));
+    const records = drawn.map((call, i) => ({ call, shownAtMs: i * 3000, taps: [tap('level', call.level!, i * 3000 + 500), tap('branch', call.branch!, i * 3000 + 900)] }));
+    const body: DrillResultBody = { ...scriptedRun(drill.id), seed: 4242, calls: records };
+    expect((await clients.operator.post('/api/drills/results').send(body).expect(201)).body.stats).toMatchObject({ answeredCount: 2, medianMs: 900 });
+    const before = await counts();
+    const other = drawn[0]!.branch === 'G' ? 'H' : 'G';
+    const swapped = { ...body, calls: [{ ...records[0]!, call: { ...drawn[0]!, branch: other } }, records[1]!] };
+    const res = await clients.operator.post('/api/drills/results').send(swapped).expect(400);
+    expect(res.body.error.issues[0]).toMatchObject({ path: 'calls.0.call', message: 'This is not the call the drill made here' });
+    expect(await counts()).toEqual(before);
   });
 
   it('keeps results when their drill is deleted', async () => {

@@ -1,5 +1,5 @@
-import { possibleCalls, type DrillCall } from '../../../shared/domain/drills/drill-calls';
-import { callWindowMs, planCallCount } from '../../../shared/domain/drills/drill-plan';
+import { possibleCalls, seededRandom, type DrillCall } from '../../../shared/domain/drills/drill-calls';
+import { callWindowMs, planCallCount, planCalls } from '../../../shared/domain/drills/drill-plan';
 import { newBests, personalBests, runStats, scoreRun, type RunSummary } from '../../../shared/domain/drills/drill-scoring';
 import type {
   Drill,
@@ -30,10 +30,12 @@ function resultIssues(drill: Drill, body: DrillResultBody): FieldIssue[] {
   const maxCalls = planCallCount(drill.plan);
   if (body.calls.length > maxCalls) issues.push({ path: 'calls', message: `The drill has ${maxCalls} calls, not ${body.calls.length}` });
   const allowed = drill.plan.mode === 'random' ? possibleCalls(drill.plan.targets) : [];
+  // A script, or a random plan with the seed its calls were drawn with, fixes every call in order.
+  const fixed = drill.plan.mode === 'scripted' ? drill.plan.calls : body.seed !== null ? planCalls(drill.plan, seededRandom(body.seed)) : undefined;
   body.calls.forEach((record, i) => {
-    const expected = drill.plan.mode === 'scripted' ? drill.plan.calls[i] : undefined;
-    const isAllowed = drill.plan.mode === 'scripted' ? expected !== undefined && sameCall(expected, record.call) : allowed.some((c) => sameCall(c, record.call));
-    if (!isAllowed) issues.push({ path: `calls.${i}.call`, message: 'This call is not one the drill makes' });
+    const expected = fixed?.[i];
+    const isAllowed = fixed ? expected !== undefined && sameCall(expected, record.call) : allowed.some((c) => sameCall(c, record.call));
+    if (!isAllowed) issues.push({ path: `calls.${i}.call`, message: fixed ? 'This is not the call the drill made here' : 'This call is not one the drill makes' });
     const previous = body.calls[i - 1];
     if (previous && record.shownAtMs < previous.shownAtMs) issues.push({ path: `calls.${i}.shownAtMs`, message: 'Calls must be in the order they were shown' });
   });
