@@ -39,7 +39,7 @@ export function CyclesView({ recordingId, isLive, timeline }: CyclesViewProps) {
         </EmptyState>
       ) : (
         <>
-          <SegmentChart cycles={cycles} onPick={pick} />
+          <SegmentChart cycles={cycles} currentIndex={currentIndex} onPick={pick} />
           <CyclesTable cycles={cycles} currentIndex={currentIndex} onPick={pick} />
         </>
       )}

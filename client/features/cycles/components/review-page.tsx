@@ -1,4 +1,4 @@
-import { Link } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import type { CycleReview } from '../../../../shared/schemas/cycle';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
@@ -51,6 +51,11 @@ export function CycleReviewPage({ view, onChange }: CycleReviewPageProps) {
 }
 
 function ReviewBody({ review }: { review: CycleReview }) {
+  const navigate = useNavigate();
+  const openMatch = (i: number) => {
+    const match = review.matches[i];
+    if (match) navigate(`/recordings/${encodeURIComponent(match.recordingId)}`);
+  };
   return (
     <>
       <div className="grid grid-cols-2 gap-3 md:grid-cols-4">
@@ -59,8 +64,12 @@ function ReviewBody({ review }: { review: CycleReview }) {
         <StatTile label="Median cycle" value={formatSeconds(review.cycleTime.medianS)} />
         <StatTile label="p90 cycle" value={formatSeconds(review.cycleTime.p90S)} detail="9 in 10 were this fast or faster" />
       </div>
-      <Section title="Cycle time per match" description="Median and p90 over each match’s place attempts, oldest match first." className="p-4">
-        <TrendChart matches={review.matches} />
+      <Section
+        title="Cycle time per match"
+        description="Median and p90 over each match’s place attempts, oldest match first. Click a match in the chart to open its replay."
+        className="p-4"
+      >
+        <TrendChart matches={review.matches} onPick={openMatch} />
         <div className="mt-4">
           <TableFrame
             caption="Cycle time per match"

@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useRef } from 'react';
 import uPlot from 'uplot';
 import type { Cycle } from '../../../../shared/schemas/cycle';
 import { segmentColumns, SEGMENTS } from '../model/cycles-view';
@@ -12,9 +12,16 @@ const LAYERS = [
   ...[...SEGMENTS].reverse().map((s) => ({ label: s.label, colour: s.colour })),
 ];
 
-/** Each cycle as one stacked bar of its segments; clicking a bar picks that cycle. */
-export function SegmentChart({ cycles, onPick }: { cycles: readonly Cycle[]; onPick: (index: number) => void }) {
+const CURRENT = '#FFCF6E';
+const BAR_SHARE = 0.62;
+
+type SegmentChartProps = { cycles: readonly Cycle[]; currentIndex: number | null; onPick: (index: number) => void };
+
+/** Each cycle as one stacked bar of its segments, the cycle under the cursor outlined; clicking a bar picks that cycle. */
+export function SegmentChart({ cycles, currentIndex, onPick }: SegmentChartProps) {
   const data = useMemo(() => segmentColumns(cycles) as uPlot.AlignedData, [cycles]);
+  const currentRef = useRef(currentIndex);
+  currentRef.current = currentIndex;
   const options = useMemo<Omit<uPlot.Options, 'width' | 'height'>>(
     () => ({
       legend: { show: false },
@@ -27,14 +34,30 @@ export function SegmentChart({ cycles, onPick }: { cycles: readonly Cycle[]; onP
       ],
       series: [
         {},
-        ...LAYERS.map((l) => ({ label: l.label, stroke: l.colour, fill: l.colour, width: 0, paths: uPlot.paths.bars!({ size: [0.62, 44] }), points: { show: false } })),
+        ...LAYERS.map((l) => ({ label: l.label, stroke: l.colour, fill: l.colour, width: 0, paths: uPlot.paths.bars!({ size: [BAR_SHARE, 44] }), points: { show: false } })),
       ],
+      hooks: {
+        draw: [
+          (u) => {
+            const i = currentRef.current;
+            if (i === null) return;
+            const x = u.valToPos(i + 1, 'x', true);
+            const slotPx = Math.abs(u.valToPos(2, 'x', true) - u.valToPos(1, 'x', true));
+            const widthPx = Math.min(slotPx * BAR_SHARE, 44 * devicePixelRatio) + 6 * devicePixelRatio;
+            u.ctx.save();
+            u.ctx.strokeStyle = CURRENT;
+            u.ctx.lineWidth = 2 * devicePixelRatio;
+            u.ctx.strokeRect(x - widthPx / 2, u.bbox.top, widthPx, u.bbox.height);
+            u.ctx.restore();
+          },
+        ],
+      },
     }),
     [],
   );
   return (
     <div data-cycle-chart="">
-      <UPlotChart options={options} optionsKey="segments" data={data} heightPx={200} onPick={onPick} label="Cycle times, each bar split into acquire, travel, align and place" />
+      <UPlotChart options={options} optionsKey="segments" data={data} heightPx={200} onPick={onPick} redrawKey={currentIndex} label="Cycle times, each bar split into acquire, travel, align and place" />
       <ul className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-sm text-asphalt-300" aria-label="Segments">
         {SEGMENTS.map((s) => (
           <li key={s.key} className="flex items-center gap-1.5">
@@ -45,6 +68,10 @@ export function SegmentChart({ cycles, onPick }: { cycles: readonly Cycle[]; onP
         <li className="flex items-center gap-1.5">
           <span aria-hidden="true" className="size-3 rounded-sm" style={{ background: WHOLE }} />
           Not split (no drive speed)
+        </li>
+        <li className="flex items-center gap-1.5">
+          <span aria-hidden="true" className="size-3 rounded-sm" style={{ boxShadow: `inset 0 0 0 2px ${CURRENT}` }} />
+          At the cursor
         </li>
       </ul>
     </div>

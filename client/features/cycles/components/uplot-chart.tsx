@@ -11,10 +11,12 @@ type UPlotChartProps = {
   /** Called with the data index under the pointer when the chart is clicked or tapped. */
   onPick?: (index: number) => void;
   label: string;
+  /** A change redraws the chart without new data (for overlays drawn in a draw hook). */
+  redrawKey?: string | number | null;
 };
 
 /** A uPlot chart made once, fed with setData, sized to its container and destroyed on unmount. */
-export function UPlotChart({ options, optionsKey, data, heightPx, onPick, label }: UPlotChartProps) {
+export function UPlotChart({ options, optionsKey, data, heightPx, onPick, label, redrawKey }: UPlotChartProps) {
   const hostRef = useRef<HTMLDivElement>(null);
   const chartRef = useRef<uPlot | null>(null);
   const pickRef = useRef(onPick);
@@ -47,6 +49,10 @@ export function UPlotChart({ options, optionsKey, data, heightPx, onPick, label 
   useEffect(() => {
     chartRef.current?.setData(data);
   }, [data]);
+
+  useEffect(() => {
+    chartRef.current?.redraw(false, false);
+  }, [redrawKey]);
 
   return <div ref={hostRef} role="img" aria-label={label} className="w-full" />;
 }
