@@ -160,6 +160,18 @@ describe('run mode', () => {
     expect(closestM).toBeLessThan(startM);
   });
 
+  it('shows the pressed look in the same task as the pointer-down, before any frame is drawn', async () => {
+    const look = await page.evaluate(() => {
+      const el = document.querySelector<SVGGElement>('[data-branch="E"]')!;
+      el.dispatchEvent(new PointerEvent('pointerdown', { bubbles: true, button: 0, pointerId: 7, isPrimary: true, pointerType: 'touch' }));
+      const pressed = { attribute: el.getAttribute('data-pressed'), filter: getComputedStyle(el).filter };
+      el.dispatchEvent(new PointerEvent('pointerup', { bubbles: true, button: 0, pointerId: 7, isPrimary: true, pointerType: 'touch' }));
+      return { ...pressed, after: el.getAttribute('data-pressed') };
+    });
+    expect(look).toEqual({ attribute: 'true', filter: 'brightness(1.5)', after: null });
+    await until(() => sim!.model.selection.branch === 'E');
+  });
+
   it('takes a selection from the keyboard as from a tap (Enter or Space on a focused button)', async () => {
     await page.getByRole('button', { name: 'Level L2' }).focus();
     await page.keyboard.press('Space');

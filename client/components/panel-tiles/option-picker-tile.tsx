@@ -45,7 +45,7 @@ export function OptionPickerTile({ tile, theme, isDesign, canWrite, aspect, live
               isStatic={isDesign}
               isDisabled={!isDesign && !canWrite}
               onPress={() => onChoose?.(o.value)}
-              className="flex min-h-0 min-w-0 touch-none items-center justify-center rounded-[clamp(4px,4cqmin,12px)] px-1 text-[clamp(14px,11cqmin,56px)] leading-none font-bold transition-[transform,filter] duration-75 select-none disabled:opacity-45 data-pressed:scale-[0.96] data-pressed:brightness-125"
+              className="flex min-h-0 min-w-0 touch-none items-center justify-center rounded-[clamp(4px,4cqmin,12px)] px-1 text-[clamp(14px,11cqmin,56px)] leading-none font-bold select-none disabled:opacity-45 data-pressed:scale-[0.96] data-pressed:brightness-125"
               style={style}
             >
               <span className="truncate">{o.label}</span>

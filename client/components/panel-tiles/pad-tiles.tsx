@@ -15,7 +15,7 @@ type PadProps<K extends 'push-pad' | 'latch-pad'> = {
 };
 
 const padClass =
-  'm-[3cqmin] flex min-h-0 flex-1 touch-none flex-col items-center justify-center gap-[3cqmin] rounded-[clamp(4px,5cqmin,14px)] px-2 text-center leading-none font-bold transition-[transform,filter] duration-75 select-none disabled:opacity-45 data-pressed:scale-[0.97] data-pressed:brightness-125';
+  'm-[3cqmin] flex min-h-0 flex-1 touch-none flex-col items-center justify-center gap-[3cqmin] rounded-[clamp(4px,5cqmin,14px)] px-2 text-center leading-none font-bold select-none disabled:opacity-45 data-pressed:scale-[0.97] data-pressed:brightness-125';
 
 /** Momentary: `true` while held, `false` on release. */
 export function PushPadTile({ tile, theme, isDesign, canWrite, live, onPress, onRelease }: PadProps<'push-pad'>) {

@@ -14,8 +14,9 @@ type PressHandlers = {
 const isPressed = (el: Element) => el.getAttribute('data-pressed') === 'true';
 
 /**
- * Handlers that act on pointer-down, not on click: the pressed look (`data-pressed`) is set on the element
- * before `onPress` runs, so it paints in the same frame as the touch. Enter and Space act the same way.
+ * Handlers that act on pointer-down, not on click: the pressed look (`data-pressed`, drawn with no transition)
+ * is set on the element before `onPress` runs, so it paints in the same frame as the touch. Enter and Space
+ * act the same way.
  */
 export function pressHandlers(isLive: boolean, onPress?: () => void, onRelease?: () => void): PressHandlers {
   const preventMenu = (e: { preventDefault(): void }) => e.preventDefault();
@@ -32,9 +33,13 @@ export function pressHandlers(isLive: boolean, onPress?: () => void, onRelease?:
   return {
     onPointerDown: (e) => {
       if (e.button !== 0) return;
-      // Keep this pointer's up even if the finger slides off, so a push pad always releases.
-      e.currentTarget.setPointerCapture?.(e.pointerId);
       down(e.currentTarget);
+      // Keep this pointer's up even if the finger slides off, so a push pad always releases.
+      try {
+        e.currentTarget.setPointerCapture(e.pointerId);
+      } catch {
+        // A pointer the browser no longer knows (e.g. already lifted): nothing to capture.
+      }
     },
     onPointerUp: (e) => up(e.currentTarget),
     onPointerCancel: (e) => up(e.currentTarget),

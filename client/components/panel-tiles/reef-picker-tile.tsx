@@ -97,7 +97,7 @@ export function ReefPickerTile({ tile, theme, season, seat, isDesign, canWrite, 
                   tabIndex={isLive ? 0 : -1}
                   data-branch={b.letter}
                   data-active={isActive || undefined}
-                  className={`cursor-pointer outline-none transition-[filter] duration-75 data-pressed:brightness-150 ${!isDesign && !canWrite ? 'opacity-45' : ''} [&:focus-visible>path]:stroke-[0.06]`}
+                  className={`cursor-pointer outline-none data-pressed:brightness-150 ${!isDesign && !canWrite ? 'opacity-45' : ''} [&:focus-visible>path]:stroke-[0.06]`}
                   {...pressHandlers(isLive, () => onChoose?.(b.letter))}
                 >
                   <path
