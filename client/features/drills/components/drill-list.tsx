@@ -21,7 +21,7 @@ export function DrillList({ drills, canRun, canEdit, onEdit }: DrillListProps) {
     <>
       <ul className="grid gap-3 md:grid-cols-2 xl:grid-cols-3">
         {drills.map((d) => (
-          <li key={d.id} className="flex flex-col gap-3 rounded-tile bg-asphalt-850 p-4 ring-1 ring-asphalt-700" aria-label={d.name}>
+          <li key={d.id} className="flex min-w-0 flex-col gap-3 rounded-tile bg-asphalt-850 p-4 ring-1 ring-asphalt-700" aria-label={d.name}>
             <div className="min-w-0">
               <div className="flex items-start gap-2">
                 <h3 className="min-w-0 flex-1 truncate pt-2 text-lg font-semibold text-asphalt-50">{d.name}</h3>

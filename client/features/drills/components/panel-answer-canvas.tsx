@@ -41,7 +41,7 @@ export function PanelAnswerCanvas({ document, page, selection, onTap }: PanelAns
     if (tap) onTap(tap.part, tap.value);
   };
   return (
-    <div ref={areaRef} className="relative flex h-full min-h-0 items-center justify-center overflow-hidden">
+    <div ref={areaRef} className="relative flex h-full min-h-0 items-start justify-center overflow-hidden">
       {scale > 0 && (
         <div
           data-testid="drill-panel-canvas"
