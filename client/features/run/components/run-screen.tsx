@@ -97,6 +97,17 @@ export function RunScreen({ panel, caution, backHref, offline }: RunScreenProps)
 
   return (
     <div className="fixed inset-0 flex flex-col overflow-hidden select-none" style={{ background: theme.canvas, color: theme.text, touchAction: 'none' }} data-testid="run-mode" data-offline={offline}>
+      {robot.isSimulated || robot.isRealRobot ? (
+        // A band across the whole top edge, so simulator and real-robot sessions differ at a glance from afar.
+        <div
+          aria-hidden="true"
+          data-testid={robot.isSimulated ? 'simulator-edge' : 'live-robot-edge'}
+          className="h-1.5 shrink-0"
+          style={{
+            background: robot.isSimulated ? `repeating-linear-gradient(-45deg, ${theme.accent} 0 10px, ${theme.canvas} 10px 20px)` : theme.danger,
+          }}
+        />
+      ) : null}
       <RunStatusStrip
         theme={theme}
         panelName={panel.name}
