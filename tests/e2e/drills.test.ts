@@ -44,6 +44,12 @@ async function storedRuns(): Promise<{ n: number; median: number | null; simulat
 describe('drills through the UI', () => {
   it('lets the operator run a drill on the published panel and see the stored result on the chart', async () => {
     const page = await signInAs(stack, 'operator', { width: 1280, height: 800 });
+    // Keep what the page asks the browser's speech synthesis to say (headless Chromium has no voices to hear).
+    await page.addInitScript(() => {
+      const spoken: string[] = [];
+      Object.assign(window, { spokenCalls: spoken });
+      if ('speechSynthesis' in window) window.speechSynthesis.speak = (u: SpeechSynthesisUtterance) => void spoken.push(u.text);
+    });
     await page.goto(`${stack.server.url}/drills`);
     await expect.poll(() => page.getByRole('heading', { name: 'Drills', level: 1 }).isVisible()).toBe(true);
     // The demo sessions of Tomas Reyes are on the chart before he runs anything.
@@ -55,6 +61,8 @@ describe('drills through the UI', () => {
     await expect.poll(() => page.getByText('Answer on the team’s published panel').isVisible()).toBe(true);
     // Each answer also goes to the standard channels, as the simulator reads them.
     await page.getByRole('switch', { name: 'Drive the simulator' }).click();
+    await page.getByRole('switch', { name: 'Speak calls' }).click();
+    expect(await page.getByRole('switch', { name: 'Speak calls' }).getAttribute('aria-checked')).toBe('true');
     await expect.poll(() => page.getByRole('complementary', { name: 'Safety' }).isVisible()).toBe(true);
     const watcher = await TestRelayClient.connect(
       relayUrl(stack.server),
@@ -68,6 +76,7 @@ describe('drills through the UI', () => {
     const call = page.getByTestId('drill-call');
     const canvas = page.getByTestId('drill-panel-canvas');
     await expect.poll(() => call.textContent(), { timeout: 8000 }).toBe('L4 · C');
+    await expect.poll(() => page.evaluate(() => (window as unknown as { spokenCalls: string[] }).spokenCalls)).toEqual(['Level 4, branch C']);
     await page.screenshot({ path: path.join(SHOTS, 'drills-run-call.png') });
     // A wrong branch first, then the right branch and level.
     await canvas.getByRole('button', { name: 'Branch D' }).click();
