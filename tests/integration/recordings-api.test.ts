@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import express from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { RELAY_EVENT_SEQ_BASE } from '../../server/features/recordings/recording-files';
 import { ROLES, type Role } from '../../shared/domain/roles';
 import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
 import { season2025 } from '../../shared/domain/season/season-2025';
@@ -71,7 +72,8 @@ describe('upload a Pitwall recording and read it back', () => {
     expect(res.body.items[0]).toMatchObject({ id: recordingId, kind: 'simulated', source: 'upload', status: 'finished', robot: 'Gullwing' });
     expect(res.body.items[0].startedAt).toBe('2025-03-14T15:00:00.000Z');
     const detail = await clients.viewer.get(`/api/recordings/${recordingId}`).expect(200);
-    expect(detail.body).toMatchObject({ signalCount: match.signals.length, eventCount: match.events.length });
+    // The robot's events and the operator's selections (the file's selection records).
+    expect(detail.body).toMatchObject({ signalCount: match.signals.length, eventCount: match.events.length + match.selections.length });
     expect(detail.body.durationS).toBeCloseTo((match.batches.at(-1)!.t0Ms + (match.batches.at(-1)!.ticks - 1) * 20) / 1000, 6);
   });
 
@@ -90,8 +92,13 @@ describe('upload a Pitwall recording and read it back', () => {
     expect(range.body.tS).toHaveLength(101);
 
     const events = await clients.viewer.get(`/api/recordings/${recordingId}/events`).expect(200);
-    expect(events.body.events.map((e: { seq: number; kind: string }) => [e.seq, e.kind])).toEqual(match.events.map((e) => [e.seq, e.kind]));
+    expect(events.body.events.map((e: { seq: number; kind: string }) => [e.seq, e.kind])).toEqual([
+      ...match.events.map((e) => [e.seq, e.kind]),
+      ...match.selections.map((_, i) => [RELAY_EVENT_SEQ_BASE + i, 'selection']),
+    ]);
     expect(events.body.events[0].tS).toBeCloseTo(match.events[0]!.tMs / 1000, 9);
+    const firstSelection = events.body.events[match.events.length];
+    expect(firstSelection.data).toEqual({ channel: match.selections[0]!.channel, value: match.selections[0]!.value });
   });
 
   it('answers 404 for a signal the recording lacks and 400 for a bad range', async () => {
@@ -112,8 +119,11 @@ describe('export', () => {
     const rows = records.flatMap((r) => (r.type === 'telemetry_batch' ? decodeTelemetry(r.data).rows : []));
     expect(rows).toHaveLength(column(0).length);
     for (const index of [0, 7, match.signals.length - 1]) expect(bits(Float32Array.from(rows, (row) => row[index]!))).toEqual(bits(column(index)));
-    const events = records.filter((r) => r.type === 'event');
-    expect(events.map((e) => e.type === 'event' && [e.tMs, e.kind])).toEqual(match.events.map((e) => [e.tMs, e.kind]));
+    const events = records.flatMap((r) => (r.type === 'event' ? [r] : []));
+    expect(events.filter((e) => e.kind !== 'selection').map((e) => [e.tMs, e.kind])).toEqual(match.events.map((e) => [e.tMs, e.kind]));
+    expect(events.filter((e) => e.kind === 'selection').map((e) => [e.tMs, e.data])).toEqual(
+      match.selections.map((x) => [x.tMs, { channel: x.channel, value: x.value }]),
+    );
     const seqs = records.flatMap((r) => ('seq' in r ? [r.seq] : []));
     expect(new Set(seqs).size).toBe(seqs.length);
 
