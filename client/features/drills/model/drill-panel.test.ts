@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_MATCH_PANEL } from '../../../../shared/domain/panels/demo-panel';
 import type { PanelDocument } from '../../../../shared/schemas/panel';
-import { drillPage, missingPanelParts, pageParts, partForChannel, tapFromTile } from './drill-panel';
+import { drillPage, pageParts, partForChannel, tapFromTile } from './drill-panel';
 
 describe('partForChannel', () => {
   it.each([
@@ -22,11 +22,10 @@ describe('drillPage', () => {
     expect(DEMO_MATCH_PANEL.pages).toContain(found.page);
   });
 
-  it('gives nothing for a panel without pickers, and names what a panel lacks', () => {
+  it('gives nothing for a panel without pickers', () => {
     const bare: PanelDocument = { ...DEMO_MATCH_PANEL, pages: [{ id: 'p1', name: 'Empty', tiles: [] }] };
     expect(drillPage(bare)).toBeUndefined();
     expect(pageParts(bare.pages[0]!)).toEqual([]);
-    expect(missingPanelParts(['branch', 'level'], [{ branch: 'A', level: 'L4' }, { station: 'left' }])).toEqual(['station']);
   });
 });
 

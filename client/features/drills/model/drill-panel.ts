@@ -1,6 +1,5 @@
 // Pure: which page of the team's published panel a drill is answered on, and which call part each tap answers.
-import { CALL_PART_CHANNELS, CALL_PARTS, type CallPart, type DrillCall } from '../../../../shared/domain/drills/drill-calls';
-import { callParts } from '../../../../shared/domain/drills/drill-calls';
+import { CALL_PART_CHANNELS, CALL_PARTS, type CallPart } from '../../../../shared/domain/drills/drill-calls';
 import type { ChannelValue } from '../../../../shared/protocol/messages';
 import type { Page, PanelDocument, Tile } from '../../../../shared/schemas/panel';
 
@@ -30,10 +29,4 @@ export function drillPage(document: PanelDocument): { page: Page; parts: CallPar
     if (parts.length > (best?.parts.length ?? 0)) best = { page, parts };
   }
   return best;
-}
-
-/** The parts the drill's calls need that the page lacks (then the standard pickers stand in). */
-export function missingPanelParts(pageCallParts: readonly CallPart[], calls: readonly DrillCall[]): CallPart[] {
-  const needed = new Set(calls.flatMap(callParts));
-  return CALL_PARTS.filter((p) => needed.has(p) && !pageCallParts.includes(p));
 }
