@@ -33,9 +33,9 @@ export function RunStatusStrip(props: RunStatusStripProps) {
         className="inline-flex min-h-10 items-center gap-1 rounded-lg px-2.5 text-[15px] font-semibold"
         style={{ color: theme.muted }}
       >
-        <span aria-hidden="true">‹</span> Pitwall
+        <span aria-hidden="true">‹</span> <span className="max-[1150px]:sr-only">Pitwall</span>
       </Link>
-      <div className="flex min-w-0 flex-col leading-tight">
+      <div className="flex min-w-0 shrink flex-col leading-tight">
         <span className="truncate text-[15px] font-bold">{props.panelName}</span>
         <span className="text-xs" style={{ color: theme.muted }}>
           version {props.versionNumber}
@@ -82,7 +82,7 @@ export function RunStatusStrip(props: RunStatusStripProps) {
             <svg viewBox="0 0 20 20" aria-hidden="true" className="size-4" fill="none" stroke="currentColor" strokeWidth="2.2">
               <path d="M3 8V3h5M12 3h5v5M17 12v5h-5M8 17H3v-5" />
             </svg>
-            Full screen
+            <span className="max-[1150px]:sr-only">Full screen</span>
           </button>
         ) : null}
       </div>
