@@ -6,6 +6,7 @@ import { formatResults } from '../bench/bench-kit';
 import { benchRecordings } from '../bench/recordings.bench';
 import { benchRecordingsApi } from '../bench/recordings-api.bench';
 import { benchRelay } from '../bench/relay.bench';
+import { benchPanelDesigner } from '../bench/panel-designer';
 import { benchReplayBrowser } from '../bench/replay-browser.bench';
 import { benchPanelRun } from '../bench/panel-run.bench';
 import { connectDb } from '../db/client';
@@ -35,6 +36,8 @@ try {
   try {
     const replay = await benchReplayBrowser({ server: recordingsApi.server, recordingId: recordingsApi.recordingId });
     process.stdout.write(`\nreplay in the browser\n${replay.join('\n')}\n`);
+    const designer = await benchPanelDesigner({ server: recordingsApi.server });
+    process.stdout.write(`\npanel designer in the browser\n${designer.join('\n')}\n`);
     const run = await benchPanelRun({ server: recordingsApi.server });
     process.stdout.write(`\nrun mode in the browser\n${run.join('\n')}\n`);
   } finally {

@@ -39,7 +39,19 @@ const HANDLES: { handle: ResizeHandle; className: string; cursor: string }[] = [
  * with the selection ring, resize handles and the panel check's mark. Memoised: a pointer move re-renders
  * only the tiles whose props change, which during a drag is the dragged ones.
  */
-export const DesignTile = memo(function DesignTile({
+export const DesignTile = memo(function DesignTile({ dragOffsetPx, ...rest }: DesignTileProps) {
+  const layer: CSSProperties | undefined = dragOffsetPx
+    ? { transform: `translate3d(${dragOffsetPx.xPx}px, ${dragOffsetPx.yPx}px, 0)`, zIndex: 20, willChange: 'transform' }
+    : undefined;
+  // Only this wrapper's transform changes while the tile is dragged; its drawing is memoised below.
+  return (
+    <div className={cx('pointer-events-none absolute inset-0', dragOffsetPx && 'opacity-90')} style={layer}>
+      <DesignTileBody {...rest} />
+    </div>
+  );
+});
+
+const DesignTileBody = memo(function DesignTileBody({
   tile,
   theme,
   device,
@@ -47,14 +59,10 @@ export const DesignTile = memo(function DesignTile({
   isSelected,
   hasHandles,
   mark,
-  dragOffsetPx,
   canEdit,
   onTilePointerDown,
   onTileKeyDown,
-}: DesignTileProps) {
-  const layer: CSSProperties | undefined = dragOffsetPx
-    ? { transform: `translate3d(${dragOffsetPx.xPx}px, ${dragOffsetPx.yPx}px, 0)`, zIndex: 20, willChange: 'transform' }
-    : undefined;
+}: Omit<DesignTileProps, 'dragOffsetPx'>) {
   const box: CSSProperties = {
     left: `${(tile.x / grid.columns) * 100}%`,
     top: `${(tile.y / grid.rows) * 100}%`,
@@ -66,7 +74,7 @@ export const DesignTile = memo(function DesignTile({
   const where = `${tile.w} × ${tile.h} cells at column ${tile.x + 1}, row ${tile.y + 1}`;
   const problems = mark ? `, ${mark.count} ${mark.severity === 'error' ? 'problem' : 'warning'}${mark.count === 1 ? '' : 's'}` : '';
   return (
-    <div className={cx('pointer-events-none absolute inset-0', dragOffsetPx && 'opacity-90')} style={layer}>
+    <>
       <TileView tile={tile} theme={theme} device={device} grid={grid} mode="design" />
       <div
         role="button"
@@ -77,12 +85,12 @@ export const DesignTile = memo(function DesignTile({
         data-selected={isSelected || undefined}
         data-issue={mark?.severity}
         className={cx(
-          'pointer-events-auto absolute touch-none rounded-[10px] outline-none select-none',
+          'pointer-events-auto absolute touch-none rounded-[10px] select-none',
           canEdit ? 'cursor-grab active:cursor-grabbing' : 'cursor-default',
-          'focus-visible:ring-4 focus-visible:ring-sky',
-          isSelected && 'ring-[3px] ring-signal-400',
-          !isSelected && mark?.severity === 'error' && 'ring-[3px] ring-stop ring-dashed',
-          !isSelected && mark?.severity === 'warning' && 'ring-2 ring-signal-600',
+          'focus-visible:outline-4 focus-visible:outline-offset-4 focus-visible:outline-sky',
+          isSelected && 'ring-4 ring-signal-400',
+          mark?.severity === 'error' && 'outline-3 outline-offset-2 outline-stop outline-dashed',
+          mark?.severity === 'warning' && 'outline-3 outline-offset-2 outline-signal-600 outline-dashed',
         )}
         style={{ ...box, margin: grid.gapPx / 2, width: `calc(${box.width} - ${grid.gapPx}px)`, height: `calc(${box.height} - ${grid.gapPx}px)` }}
         onPointerDown={(e) => onTilePointerDown(e, tile.id, null)}
@@ -96,7 +104,6 @@ export const DesignTile = memo(function DesignTile({
               mark.severity === 'error' ? 'bg-stop text-asphalt-950' : 'bg-signal-400 text-asphalt-950',
             )}
           >
-            {mark.severity === 'error' ? '!' : ''}
             {mark.count}
           </span>
         )}
@@ -116,6 +123,6 @@ export const DesignTile = memo(function DesignTile({
             />
           ))}
       </div>
-    </div>
+    </>
   );
 });

@@ -23,7 +23,7 @@ export function PageTabs({ doc, pageId, canEdit, dispatch, newPageId }: PageTabs
   return (
     <div className="flex min-w-0 items-center gap-1">
       <div role="tablist" aria-label="Pages" className="flex min-w-0 items-center gap-1 overflow-x-auto">
-        {doc.pages.map((p, i) =>
+        {doc.pages.map((p) =>
           renaming?.id === p.id ? (
             <input
               key={p.id}
@@ -52,9 +52,12 @@ export function PageTabs({ doc, pageId, canEdit, dispatch, newPageId }: PageTabs
                 p.id === pageId ? 'bg-asphalt-700 text-asphalt-100 ring-1 ring-signal-500/60' : 'text-asphalt-300 hover:bg-asphalt-800 hover:text-asphalt-100',
               )}
             >
-              <span className="num mr-1.5 text-2xs text-asphalt-500">{i + 1}</span>
               {p.name}
-              <span className="ml-1.5 text-xs font-normal text-asphalt-400">{p.tiles.length}</span>
+              <span className="num ml-2 rounded bg-asphalt-800 px-1.5 py-0.5 text-2xs font-normal text-asphalt-400" title={`${p.tiles.length} tiles`}>
+                <span className="sr-only">, </span>
+                {p.tiles.length}
+                <span className="sr-only"> tiles</span>
+              </span>
             </button>
           ),
         )}

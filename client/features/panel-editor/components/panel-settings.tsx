@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { deviceSize } from '../../../../shared/domain/panels/grid';
+import { cellSize, deviceSize } from '../../../../shared/domain/panels/grid';
 import { DEVICE_PRESETS, type DevicePreset, type PanelDocument } from '../../../../shared/schemas/panel';
 import { SegmentedControl } from '../../../components/ui/segmented-control';
 import type { EditorAction } from '../model/editor-state';
@@ -13,8 +13,7 @@ export function PanelSettings({ doc, canEdit, dispatch }: { doc: PanelDocument; 
   const { device, grid } = doc;
   const [isCustom, setIsCustom] = useState(device.preset === 'custom');
   const screen = deviceSize(device);
-  const cellW = screen.widthPx / grid.columns;
-  const cellH = screen.heightPx / grid.rows;
+  const cell = cellSize(device, grid);
   return (
     <fieldset disabled={!canEdit} className="flex flex-col gap-4">
       <legend className="mb-1 text-sm font-semibold text-asphalt-100">Tablet and grid</legend>
@@ -58,7 +57,7 @@ export function PanelSettings({ doc, canEdit, dispatch }: { doc: PanelDocument; 
       <p className="text-sm text-asphalt-400">
         Screen <span className="num text-asphalt-200">{screen.widthPx} × {screen.heightPx}</span> px; one cell{' '}
         <span className="num text-asphalt-200">
-          {cellW.toFixed(1)} × {cellH.toFixed(1)}
+          {cell.widthPx.toFixed(1)} × {cell.heightPx.toFixed(1)}
         </span>{' '}
         px. Shrinking the grid moves tiles inside it.
       </p>

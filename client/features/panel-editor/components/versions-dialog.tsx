@@ -83,7 +83,7 @@ function VersionsBody({ list, versionQuery, publishedVersionId, baseVersionId, c
   }, [restoringId, restoring.data, onRestore]);
 
   const diff = from.data && to.data ? diffDocuments(from.data.document, to.data.document) : null;
-  const options = newestFirst.map((v) => ({ value: v.id, label: `v${v.number} · ${v.author.name} · ${formatDateTime(v.createdAt)}` }));
+  const options = newestFirst.map((v) => ({ value: v.id, label: `v${v.number} · ${v.author.name}` }));
 
   return (
     <div className="grid gap-5 lg:grid-cols-[minmax(0,1.1fr)_minmax(0,1fr)]">

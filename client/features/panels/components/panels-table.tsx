@@ -6,7 +6,7 @@ import { buttonClasses } from '../../../components/ui/button-styles';
 import { cx } from '../../../lib/cx';
 import { formatDateTime, formatRelative } from '../../../lib/format-time';
 import { exportPanelUrl } from '../api/panels';
-import { deviceLabel, exportFileName, publishedState } from '../model/library';
+import { deviceName, exportFileName, publishedState } from '../model/library';
 
 type PanelsTableProps = {
   panels: readonly PanelSummary[];
@@ -88,12 +88,15 @@ function PanelRow({ panel: p, canEdit, nowMs, isHighlighted, isDuplicating, onRe
           {p.tileCount === 1 ? '1 tile' : `${p.tileCount} tiles`}
         </p>
       </th>
-      <td className="px-3 py-3 whitespace-nowrap text-asphalt-200">{deviceLabel(p.device)}</td>
+      <td className="px-3 py-3 whitespace-nowrap text-asphalt-200">
+        {deviceName(p.device)}
+        <span className="block text-sm text-asphalt-400">{p.device.orientation === 'portrait' ? 'Portrait' : 'Landscape'}</span>
+      </td>
       <td className="px-3 py-3">
         <p className="whitespace-nowrap text-asphalt-200">
           <span className="num text-asphalt-100">v{latest.number}</span> · <time dateTime={latest.createdAt} title={formatDateTime(latest.createdAt)}>{formatRelative(latest.createdAt, nowMs)}</time>
         </p>
-        <p className="text-sm text-asphalt-400">by {latest.author.name}</p>
+        <p className="text-sm whitespace-nowrap text-asphalt-400">by {latest.author.name}</p>
       </td>
       <td className="px-3 py-3 whitespace-nowrap" data-testid="published-cell">
         {published.kind === 'none' ? (
@@ -108,7 +111,7 @@ function PanelRow({ panel: p, canEdit, nowMs, isHighlighted, isDuplicating, onRe
         )}
       </td>
       <td className="px-4 py-2">
-        <div className="flex flex-wrap justify-end gap-1">
+        <div className="flex flex-nowrap justify-end gap-0.5">
           <Link to={`/panels/${p.id}/edit`} className={buttonClasses(canEdit ? 'primary' : 'secondary', 'sm')} aria-label={`${canEdit ? 'Edit' : 'View'} ${p.name}`}>
             {canEdit ? 'Edit' : 'View'}
           </Link>

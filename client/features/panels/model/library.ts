@@ -68,11 +68,15 @@ export function readCreateForm(form: CreatePanelForm): CreateFormResult {
   return { ok: true, name: name.data, device: device.data };
 }
 
-/** "Tablet 1280 × 800 · landscape", or "Custom 1366 × 1024 · portrait" (the size as the tablet is held). */
-export function deviceLabel(device: Device): string {
+/** "Tablet 800 × 1280" (the size as the tablet is held), or "Custom 1366 × 1024". */
+export function deviceName(device: Device): string {
   const [w, h] = device.orientation === 'portrait' ? [device.heightPx, device.widthPx] : [device.widthPx, device.heightPx];
-  const kind = device.preset === 'custom' ? 'Custom' : 'Tablet';
-  return `${kind} ${w} × ${h} · ${device.orientation}`;
+  return `${device.preset === 'custom' ? 'Custom' : 'Tablet'} ${w} × ${h}`;
+}
+
+/** "Tablet 1280 × 800 · landscape", or "Custom 1366 × 1024 · portrait". */
+export function deviceLabel(device: Device): string {
+  return `${deviceName(device)} · ${device.orientation}`;
 }
 
 export type PublishedState =
