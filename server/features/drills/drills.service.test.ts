@@ -66,8 +66,8 @@ const run = (drillId: string, extraMs: number, calls = 2): DrillResultBody => ({
   seed: null,
   calls: (
     [
-    { call: { branch: 'C', level: 'L4' }, shownAtMs: 0, taps: [{ part: 'branch', value: 'C', tMs: 400 }, { part: 'level', value: 'L4', tMs: 900 + extraMs }] },
-    { call: { station: 'left' }, shownAtMs: 4000, taps: [{ part: 'station', value: 'left', tMs: 4700 + extraMs }] },
+      { call: { branch: 'C', level: 'L4' }, shownAtMs: 0, taps: [{ part: 'branch', value: 'C', tMs: 400 }, { part: 'level', value: 'L4', tMs: 900 + extraMs }] },
+      { call: { station: 'left' }, shownAtMs: 4000, taps: [{ part: 'station', value: 'left', tMs: 4700 + extraMs }] },
     ] satisfies DrillCallRecord[]
   ).slice(0, calls),
 });
