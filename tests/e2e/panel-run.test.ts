@@ -218,6 +218,23 @@ describe('run mode', () => {
     await relayPill().getByText('Relay connected').waitFor({ timeout: 10_000 });
   });
 
+  it('offers a version published while it runs, and switches only when asked', async () => {
+    const programmer = await stack.server.client();
+    await programmer.post('/api/auth/sign-in').send({ email: 'programmer@harborlight.example', password: DEMO_PASSWORD }).expect(200);
+    const published = (await programmer.get('/api/panels/published').expect(200)).body as { panelId: string; version: { id: string; number: number; document: unknown } };
+    const panel = (await programmer.get(`/api/panels/${published.panelId}`).expect(200)).body as { latestVersion: { id: string } };
+    const saved = (await programmer.put(`/api/panels/${published.panelId}`).send({ baseVersionId: panel.latestVersion.id, document: published.version.document, message: 'Same layout, new version' }).expect(200)).body as {
+      latestVersion: { id: string; number: number };
+    };
+    await programmer.post(`/api/panels/${published.panelId}/publish`).send({ versionId: saved.latestVersion.id }).expect(200);
+    const offer = page.getByRole('button', { name: `Version ${saved.latestVersion.number} published · Load it` });
+    await offer.waitFor({ timeout: 20_000 });
+    await page.getByText(`version ${published.version.number}`, { exact: true }).waitFor();
+    await offer.click();
+    await page.getByText(`version ${saved.latestVersion.number}`, { exact: true }).waitFor();
+    expect(await page.getByRole('button', { name: /^Branch [A-L]$/ }).count()).toBe(12);
+  });
+
   it('runs an unpublished panel at /panels/:id/run for a programmer, marked as a draft', async () => {
     const programmer = await stack.server.client();
     await programmer.post('/api/auth/sign-in').send({ email: 'programmer@harborlight.example', password: DEMO_PASSWORD }).expect(200);

@@ -1,9 +1,10 @@
+import { useState } from 'react';
 import { Navigate, useLocation, useParams } from 'react-router-dom';
 import { can } from '../../../shared/domain/roles';
 import { useMe } from '../../features/auth/api/me';
 import { signInPathFor } from '../../features/auth/model/safe-next-path';
 import type { RunPanel } from '../../features/run/api/run-panel';
-import { usePublishedRunPanel, useRunPanel } from '../../features/run/api/run-panel';
+import { runPanelKey, usePublishedRunPanel, useRunPanel } from '../../features/run/api/run-panel';
 import { useRunRelayWarmUp } from '../../features/run/hooks/run-relay';
 import { useRunServiceWorker, type OfflineState } from '../../features/run/hooks/use-run-screen';
 import { useSeasonProfile } from '../../components/panel-tiles/use-season-profile';
@@ -21,7 +22,8 @@ function RunGate({ query, backHref, offline }: { query: Loaded; backHref: string
   useRunRelayWarmUp();
   useSeasonProfile();
   if (query.isPending) return <RunMessage isBusy title="Opening the panel…" backHref={backHref} />;
-  if (query.isError || !query.data) {
+  // A failed re-check keeps the panel that is running: only a first load that fails shows a message.
+  if (!query.data) {
     const status = isApiError(query.error) ? query.error.status : 0;
     if (status === 401) return <Navigate to={signInPathFor(location.pathname, location.search)} replace />;
     if (status === 403) return <ForbiddenMessage backHref={backHref} />;
@@ -46,7 +48,22 @@ function RunGate({ query, backHref, offline }: { query: Loaded; backHref: string
       </RunMessage>
     );
   }
-  return <RunScreen panel={query.data} caution={<SafetyCaution />} backHref={backHref} offline={offline} />;
+  return <PinnedRunScreen latest={query.data} backHref={backHref} offline={offline} />;
+}
+
+/** Runs the version it opened with; a newer one the server reports is offered, and loaded only on a tap. */
+function PinnedRunScreen({ latest, backHref, offline }: { latest: RunPanel; backHref: string; offline?: OfflineState }) {
+  const [pinned, setPinned] = useState(latest);
+  const newer = runPanelKey(latest) !== runPanelKey(pinned) ? latest : undefined;
+  return (
+    <RunScreen
+      panel={pinned}
+      caution={<SafetyCaution />}
+      backHref={backHref}
+      offline={offline}
+      newerVersion={newer ? { versionNumber: newer.versionNumber, onLoad: () => setPinned(newer) } : undefined}
+    />
+  );
 }
 
 function ForbiddenMessage({ backHref }: { backHref: string }) {

@@ -34,10 +34,16 @@ export async function getRunPanel(id: string): Promise<RunPanel> {
 
 // networkMode 'always': a driver station has no internet, and the browser may call itself offline while the
 // service worker still answers from its cache, so the query must not wait for the network to come back.
+// Asked again every RECHECK_MS, so a version published meanwhile is offered on the tablet (never swapped in
+// by itself: a layout must not change under an operator's finger).
+export const RECHECK_MS = 10_000;
 export const publishedRunPanelQuery = () =>
-  queryOptions({ queryKey: runPanelKeys.published, queryFn: getPublishedRunPanel, networkMode: 'always', refetchOnWindowFocus: false, staleTime: 60_000 });
+  queryOptions({ queryKey: runPanelKeys.published, queryFn: getPublishedRunPanel, networkMode: 'always', refetchOnWindowFocus: false, refetchInterval: RECHECK_MS });
 export const runPanelQuery = (id: string) =>
-  queryOptions({ queryKey: runPanelKeys.forPanel(id), queryFn: () => getRunPanel(id), networkMode: 'always', refetchOnWindowFocus: false, staleTime: 60_000 });
+  queryOptions({ queryKey: runPanelKeys.forPanel(id), queryFn: () => getRunPanel(id), networkMode: 'always', refetchOnWindowFocus: false, refetchInterval: RECHECK_MS });
+
+/** Which panel version a RunPanel is, to tell a newer one apart. */
+export const runPanelKey = (p: Pick<RunPanel, 'panelId' | 'versionNumber' | 'isDraft'>) => `${p.panelId}:${p.versionNumber}:${p.isDraft ? 'draft' : 'published'}`;
 
 export const usePublishedRunPanel = () => useQuery(publishedRunPanelQuery());
 export const useRunPanel = (id: string) => useQuery(runPanelQuery(id));

@@ -19,6 +19,8 @@ type RunScreenProps = {
   backHref: string;
   /** Whether the service worker keeps this panel for opening with no network (only /run registers it). */
   offline?: OfflineState;
+  /** A version published after this one opened, and how to switch to it. */
+  newerVersion?: { versionNumber: number; onLoad: () => void };
 };
 
 declare global {
@@ -29,7 +31,7 @@ declare global {
 }
 
 /** Run mode: the panel full screen, live over the relay. */
-export function RunScreen({ panel, caution, backHref, offline }: RunScreenProps) {
+export function RunScreen({ panel, caution, backHref, offline, newerVersion }: RunScreenProps) {
   useRunPageLock();
   const fullscreen = useFullscreen();
   const wakeLock = useWakeLock();
@@ -117,6 +119,7 @@ export function RunScreen({ panel, caution, backHref, offline }: RunScreenProps)
         robot={robot}
         backHref={backHref}
         pages={pages}
+        newerVersion={newerVersion}
         seat={<SeatChooser settings={settings} theme={theme} wakeLock={wakeLock} offline={offline} canVibrate={canVibrate} onChange={updateSettings} />}
         isFullscreen={fullscreen.isFullscreen}
         canFullscreen={fullscreen.isSupported}

@@ -13,6 +13,7 @@ type RunStatusStripProps = {
   robot: RobotLinkView;
   backHref: string;
   pages?: ReactNode;
+  newerVersion?: { versionNumber: number; onLoad: () => void };
   seat: ReactNode;
   isFullscreen: boolean;
   canFullscreen: boolean;
@@ -47,6 +48,16 @@ export function RunStatusStrip(props: RunStatusStripProps) {
         </span>
       </div>
       {props.pages}
+      {props.newerVersion ? (
+        <button
+          type="button"
+          onClick={props.newerVersion.onLoad}
+          className="inline-flex min-h-10 shrink-0 items-center gap-1.5 rounded-lg px-3 text-[15px] font-bold whitespace-nowrap"
+          style={{ color: theme.accent, boxShadow: `inset 0 0 0 2px ${theme.accent}` }}
+        >
+          Version {props.newerVersion.versionNumber} published · Load it
+        </button>
+      ) : null}
       <div className="ml-auto flex items-center gap-2">
         {robot.isSimulated ? (
           <span
