@@ -115,32 +115,36 @@ function panelProblemOf(error: unknown): string | null {
   return 'The published panel could not be loaded.';
 }
 
-/** /drills/:id/run: the operator's full-screen drill view. */
-export function RunComponent() {
-  const { id = '' } = useParams();
-  const me = useMe();
-  const drill = useDrill(id);
-  const panel = usePublishedPanel();
-  const redirect = useSignInRedirect(me.error ?? drill.error);
+type ViewGateProps = {
+  mode: 'self' | 'coached';
+  me: ReturnType<typeof useMe>;
+  panel: ReturnType<typeof usePublishedPanel>;
+  drill?: ReturnType<typeof useDrill>;
+};
+
+/** What both drill views show before the view itself: sign-in, loading, a missing drill, a viewer. */
+function DrillViewGate({ mode, me, panel, drill }: ViewGateProps) {
+  const redirect = useSignInRedirect(me.error ?? drill?.error);
   if (redirect) return redirect;
   // The panel's query key lies outside ['drills'], so storing a result never puts it back to pending under a run.
-  if (me.isPending || drill.isPending || panel.isPending) return <RunMessage isBusy title="Opening the drill…" backHref="/drills" />;
-  if (drill.isError || !me.data)
+  if (me.isPending || drill?.isPending || panel.isPending) return <RunMessage isBusy title="Opening the drill…" backHref="/drills" />;
+  if (drill?.isError)
     return (
       <RunMessage tone="problem" title={isApiError(drill.error) && drill.error.status === 404 ? 'No such drill' : 'The drill could not be loaded'} backHref="/drills">
         {drill.error instanceof Error ? drill.error.message : null}
       </RunMessage>
     );
+  if (!me.data) return <RunMessage tone="problem" title="Pitwall could not reach its server" backHref="/drills" />;
   if (!can(me.data.role, 'drills.run'))
     return (
       <RunMessage title="Viewers watch drills" backHref="/drills">
-        Operators, coaches, programmers and leads run drills.
+        Operators, coaches, programmers and leads take part in drills.
       </RunMessage>
     );
   return (
     <DrillRunView
-      mode="self"
-      drill={drill.data}
+      mode={mode}
+      drill={drill?.data}
       panel={panel.data ?? null}
       panelProblem={panelProblemOf(panel.error)}
       operatorName={me.data.user.name}
@@ -151,31 +155,15 @@ export function RunComponent() {
   );
 }
 
+/** /drills/:id/run: the operator's full-screen drill view. */
+export function RunComponent() {
+  const { id = '' } = useParams();
+  return <DrillViewGate mode="self" me={useMe()} panel={usePublishedPanel()} drill={useDrill(id)} />;
+}
+
 /** /drills/follow: the operator's drill view following the calls a coach sends over the relay. */
 export function FollowComponent() {
-  const me = useMe();
-  const panel = usePublishedPanel();
-  const redirect = useSignInRedirect(me.error);
-  if (redirect) return redirect;
-  if (me.isPending || panel.isPending) return <RunMessage isBusy title="Opening the drill view…" backHref="/drills" />;
-  if (!me.data) return <RunMessage tone="problem" title="Pitwall could not reach its server" backHref="/drills" />;
-  if (!can(me.data.role, 'drills.run'))
-    return (
-      <RunMessage title="Viewers watch drills" backHref="/drills">
-        Operators, coaches, programmers and leads take part in drills.
-      </RunMessage>
-    );
-  return (
-    <DrillRunView
-      mode="coached"
-      panel={panel.data ?? null}
-      panelProblem={panelProblemOf(panel.error)}
-      operatorName={me.data.user.name}
-      canDriveSimulator={can(me.data.role, 'panels.run')}
-      backHref="/drills"
-      safety={<SafetyCaution />}
-    />
-  );
+  return <DrillViewGate mode="coached" me={useMe()} panel={usePublishedPanel()} />;
 }
 
 /** /drills/:id/send: a coach sends the drill's calls to the operator's tablet. */
