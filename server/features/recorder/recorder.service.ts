@@ -15,6 +15,9 @@ import type { RecordingKind, RecordingsService } from '../recordings/recordings.
 
 export type RobotMode = 'disabled' | 'auto' | 'teleop';
 
+/** How long a recording ended by hand waits for messages the relay had received but not yet stored. */
+const FINISH_WAIT_MS = 2000;
+
 export interface RecorderOptions {
   recordings: RecordingsService;
   repo: RecorderRepo;
@@ -45,11 +48,18 @@ interface Segment {
   /** Selections and acks waiting for the recording's first stored message. */
   relayEvents: RelayEvent[];
   finished: boolean;
+  /** Ended now (by hand or past the grace): finish once every message up to this seq has reached the store. */
+  finishAfterSeq: number | undefined;
+  finishTimer: ReturnType<typeof setTimeout> | undefined;
+  /** Called once the recording is finished (stopRecording waits on it). */
+  onFinished: (() => void)[];
 }
 
 interface StreamState {
   ref: StreamRef;
   maxSeq: number;
+  /** The highest seq the relay has handed to the store (it may hold later ones in its queue meanwhile). */
+  appendedUpTo: number;
   mode: RobotMode | undefined;
   simulated: boolean;
   robotMinusServerMs: number;
@@ -89,6 +99,7 @@ export function createRecorder(options: RecorderOptions) {
       state = {
         ref,
         maxSeq: -1,
+        appendedUpTo: -1,
         mode: undefined,
         simulated: false,
         robotMinusServerMs: 0,
@@ -128,6 +139,9 @@ export function createRecorder(options: RecorderOptions) {
       recordingId: undefined,
       relayEvents: [],
       finished: false,
+      finishAfterSeq: undefined,
+      finishTimer: undefined,
+      onFinished: [],
     };
     state.segments.push(segment);
     segmentsByKey.set(`${state.ref.teamId}/${segment.key}`, { stream: state, segment });
@@ -137,11 +151,22 @@ export function createRecorder(options: RecorderOptions) {
     return segment;
   }
 
-  /** Ends the segment before `toSeq`; with `now`, finishes it once what is queued is written. */
+  /**
+   * Ends the segment before `toSeq`; with `now`, finishes it once every message before `toSeq` is written.
+   * The relay may still hold some of them in its store queue, so that can be after a later append (or, should
+   * they never come, after FINISH_WAIT_MS).
+   */
   function end(state: StreamState, segment: Segment, toSeq: number, now: boolean): void {
     segment.toSeq = toSeq;
     segment.closeAtRobotMs = undefined;
-    if (now) void enqueue(state, () => finish(state, segment)).catch(logFailure);
+    if (!now) return;
+    if (state.appendedUpTo >= toSeq - 1) {
+      void enqueue(state, () => finish(state, segment)).catch(logFailure);
+      return;
+    }
+    segment.finishAfterSeq = toSeq - 1;
+    segment.finishTimer = setTimeout(() => void enqueue(state, () => finish(state, segment)).catch(logFailure), FINISH_WAIT_MS);
+    segment.finishTimer.unref?.();
   }
 
   function setMode(state: StreamState, mode: RobotMode, boundarySeq: number, robotMs: number): void {
@@ -181,6 +206,16 @@ export function createRecorder(options: RecorderOptions) {
   async function finish(state: StreamState, segment: Segment): Promise<void> {
     if (segment.finished) return;
     segment.finished = true;
+    clearTimeout(segment.finishTimer);
+    segment.finishAfterSeq = undefined;
+    try {
+      await finishStored(state, segment);
+    } finally {
+      for (const resolve of segment.onFinished.splice(0)) resolve();
+    }
+  }
+
+  async function finishStored(state: StreamState, segment: Segment): Promise<void> {
     await flushRelayEvents(segment);
     if (segment.recordingId) {
       const row = await recordings.finish(state.ref.teamId, segment.recordingId);
@@ -209,6 +244,7 @@ export function createRecorder(options: RecorderOptions) {
       const groups = new Map<Segment, DurableMessage[]>();
       const toFinish = new Set<Segment>();
       for (const m of messages) {
+        state.appendedUpTo = Math.max(state.appendedUpTo, m.seq);
         for (const x of state.segments) if (x.toSeq !== undefined && m.seq >= x.toSeq && !x.finished) toFinish.add(x);
         const segment = segmentFor(state, m.seq);
         if (!segment) {
@@ -219,6 +255,7 @@ export function createRecorder(options: RecorderOptions) {
         if (!list) groups.set(segment, (list = []));
         list.push(m);
       }
+      for (const x of state.segments) if (x.finishAfterSeq !== undefined && !x.finished && state.appendedUpTo >= x.finishAfterSeq) toFinish.add(x);
       const horizon = state.lastRobotMs - preRollMs;
       while (state.between.length > 0 && endMs(state.between[0]!) < horizon) state.between.shift();
       return enqueue(state, async () => {
@@ -309,7 +346,9 @@ export function createRecorder(options: RecorderOptions) {
       for (const state of robotStreams(teamId, robot)) {
         const open = openSegment(state);
         if (!open) continue;
+        const finished = new Promise<void>((resolve) => open.onFinished.push(resolve));
         end(state, open, state.maxSeq + 1, true);
+        await finished;
         await state.chain;
         return open.recordingId;
       }
@@ -356,9 +395,13 @@ export function createRecorder(options: RecorderOptions) {
           recordingId: row.id,
           relayEvents: [],
           finished: false,
+          finishAfterSeq: undefined,
+          finishTimer: undefined,
+          onFinished: [],
         };
         state.segments.push(segment);
         state.maxSeq = Math.max(state.maxSeq, row.maxSeq ?? fromSeq - 1);
+        state.appendedUpTo = state.maxSeq;
         if (row.lastMode !== null && isMode(row.lastMode)) state.mode = row.lastMode;
         segmentsByKey.set(`${row.teamId}/${segment.key}`, { stream: state, segment });
         state.graceTimer = setTimeout(() => {
@@ -377,7 +420,10 @@ export function createRecorder(options: RecorderOptions) {
     },
 
     close(): void {
-      for (const state of streams.values()) clearTimeout(state.graceTimer);
+      for (const state of streams.values()) {
+        clearTimeout(state.graceTimer);
+        for (const segment of state.segments) clearTimeout(segment.finishTimer);
+      }
     },
   };
 }

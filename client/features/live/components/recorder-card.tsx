@@ -20,7 +20,7 @@ export function RecorderCard({ canRecord }: { canRecord: boolean }) {
   const failure = start.error ?? stop.error;
   return (
     <div className="flex flex-col gap-3">
-      {robots.length === 0 && <p className="text-[0.9375rem] text-asphalt-400">No robot is connected, so nothing is being recorded.</p>}
+      {robots.length === 0 && <p className="text-[0.9375rem] text-asphalt-400">Nothing to record until a robot connects.</p>}
       <ul className="flex flex-col gap-2">
         {robots.map((r) => (
           <li key={r.robot} className="flex flex-wrap items-center gap-x-3 gap-y-2 rounded-lg bg-asphalt-900 px-3 py-2.5 ring-1 ring-asphalt-750">
