@@ -3,6 +3,8 @@
 // property form and watches the panel check flag and clear a clash, saves, publishes and sees the library show
 // the published version; two members editing one panel get the conflict dialog without losing work; an operator
 // sees the library read only.
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -146,10 +148,7 @@ describe('the panel designer through the UI', () => {
     const id = await createPanel(first, 'Pit rehearsal panel');
     const second = await signIn('lead');
     await second.goto(`${stack.server.url}/panels/${id}/edit`);
-    await second.getByTestId('design-canvas').waitFor({ timeout: 5000 }).catch(async (e) => {
-      await second.screenshot({ path: path.join(SHOTS, 'debug-second.png') });
-      throw e;
-    });
+    await second.getByTestId('design-canvas').waitFor();
 
     // The first editor places a push pad and saves (v2).
     await first.locator('[data-palette-kind="push-pad"]').click();
@@ -175,6 +174,48 @@ describe('the panel designer through the UI', () => {
     await expect.poll(() => second.locator('[data-design-tile]').count()).toBe(2);
     await first.context().close();
     await second.context().close();
+  });
+
+  it('exports a panel to a file and imports it back, and lists what is wrong with a bad file', async () => {
+    const page = await signIn('programmer');
+    await page.goto(`${stack.server.url}/panels`);
+    const row = page.locator('tr', { hasText: 'Gullwing match panel' });
+    const [download] = await Promise.all([page.waitForEvent('download'), row.getByRole('link', { name: /^Export / }).click()]);
+    const dir = mkdtempSync(path.join(tmpdir(), 'pitwall-panels-'));
+    const good = path.join(dir, download.suggestedFilename());
+    await download.saveAs(good);
+    const file = JSON.parse(readFileSync(good, 'utf8')) as { format: string; name: string; document: { pages: { tiles: { channel?: string }[] }[] } };
+    expect(file.format).toBe('pitwall.panel');
+
+    // The same file with a tile bound to something that is not a channel, and a file that is not JSON.
+    file.name = 'Gullwing match panel (from file)';
+    const broken = structuredClone(file);
+    // The first tile bound to a channel (a caption has none).
+    const bound = broken.document.pages[0]!.tiles.findIndex((t) => t.channel !== undefined);
+    broken.document.pages[0]!.tiles[bound]!.channel = 'reef branch';
+    const brokenPath = path.join(dir, 'broken-panel.json');
+    writeFileSync(brokenPath, JSON.stringify(broken));
+    const notJson = path.join(dir, 'notes.json');
+    writeFileSync(notJson, 'reef: A, level: L4');
+    const importedPath = path.join(dir, 'imported-panel.json');
+    writeFileSync(importedPath, JSON.stringify(file));
+
+    const input = page.getByLabel('Import a panel file');
+    await input.setInputFiles(notJson);
+    await page.getByText('notes.json wasn’t imported').waitFor();
+    await expect.poll(() => page.getByText(/isn’t JSON/).isVisible()).toBe(true);
+
+    await input.setInputFiles(brokenPath);
+    const refusal = page.getByRole('alert').filter({ hasText: 'broken-panel.json wasn’t imported' });
+    await refusal.waitFor();
+    await expect.poll(() => refusal.getByRole('list', { name: 'What is wrong with the file' }).textContent()).toContain(`page 1, tile ${bound + 1}, channel`);
+    await page.screenshot({ path: path.join(SHOTS, 'panels-library-import-refused.png'), fullPage: true });
+
+    await input.setInputFiles(importedPath);
+    const imported = page.locator('tr', { hasText: 'Gullwing match panel (from file)' });
+    await imported.getByText('Just added').waitFor();
+    await expect.poll(() => page.getByText('broken-panel.json wasn’t imported').count()).toBe(0);
+    await page.context().close();
   });
 
   it('gives an operator a read-only library', async () => {

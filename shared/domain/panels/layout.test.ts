@@ -1,3 +1,4 @@
+import { max, mean, min, sum } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
 import { panelDocumentSchema, type PanelDocument, type Tile } from '../../schemas/panel';
 import {
@@ -194,6 +195,17 @@ describe('distributeTiles', () => {
     // Span 0 … 8 holds 4 cells of tiles and 4 free cells over 3 gaps: 2, 1, 1.
     const next = distributeTiles(doc, 'match', ['a', 'b', 'c', 'd'], 'vertical');
     expect(['a', 'b', 'c', 'd'].map((id) => rectOf(next, id).y)).toEqual([0, 3, 5, 7]);
+  });
+
+  it('leaves gaps that differ by at most one cell and add up to the free span (checked with simple-statistics)', () => {
+    const doc = makePanel([pad('a', 0, 0, 1, 1), pad('b', 1, 0, 2, 1), pad('c', 3, 0, 1, 1), pad('d', 4, 0, 1, 1), pad('e', 11, 0, 1, 1)]);
+    const next = distributeTiles(doc, 'match', ['a', 'b', 'c', 'd', 'e'], 'horizontal');
+    const rects = ['a', 'b', 'c', 'd', 'e'].map((id) => rectOf(next, id));
+    const gaps = rects.slice(1).map((r, i) => r.x - (rects[i]!.x + rects[i]!.w));
+    // Span 0 … 12 holds 6 cells of tiles: 6 free cells over 4 gaps, so a mean gap of 1.5 cells.
+    expect(sum(gaps)).toBe(6);
+    expect(mean(gaps)).toBeCloseTo(1.5);
+    expect(max(gaps) - min(gaps)).toBeLessThanOrEqual(1);
   });
 
   it('needs three tiles', () => {

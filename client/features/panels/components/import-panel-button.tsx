@@ -31,7 +31,8 @@ export function ImportPanelButton({ onImported, onRefused }: ImportPanelButtonPr
         setState({
           step: 'refused',
           fileName: file.name,
-          message: errorMessage(e),
+          // With issues, the server's one-line message repeats the first of them; say what to do instead.
+          message: isApiError(e) && e.issues.length > 0 ? 'Nothing was stored. Fix these in the file and import it again:' : errorMessage(e),
           lines: isApiError(e) ? importIssueLines(e.issues) : [],
         }),
     });
