@@ -232,6 +232,7 @@ describe('the panel designer through the UI', () => {
     await page.getByRole('link', { name: 'View Lakeshore quals panel' }).click();
     await page.getByTestId('design-canvas').waitFor();
     expect(await page.getByRole('navigation', { name: 'Tile palette' }).count()).toBe(0);
+    await page.screenshot({ path: path.join(SHOTS, 'panel-designer-read-only.png') });
     expect(await page.getByRole('button', { name: 'Save', exact: true }).count()).toBe(0);
     await page.context().close();
   });

@@ -1,4 +1,4 @@
-import { DndContext, DragOverlay, PointerSensor, useSensor, useSensors, type DragEndEvent, type DragStartEvent } from '@dnd-kit/core';
+import { DndContext, DragOverlay, MouseSensor, TouchSensor, useSensor, useSensors, type DragEndEvent, type DragStartEvent } from '@dnd-kit/core';
 import type { UseQueryResult } from '@tanstack/react-query';
 import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
 import { Link, useBlocker } from 'react-router-dom';
@@ -172,7 +172,11 @@ export function PanelDesigner({ panel, canEdit, robotReads, robotNote, versions,
     }
   }
 
-  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }));
+  // A mouse drags after 6 px; a finger after a 200 ms press, so a swipe still scrolls the palette and a tap places the tile.
+  const sensors = useSensors(
+    useSensor(MouseSensor, { activationConstraint: { distance: 6 } }),
+    useSensor(TouchSensor, { activationConstraint: { delay: 200, tolerance: 8 } }),
+  );
   function onDragStart(e: DragStartEvent) {
     const kind = (e.active.data.current as { kind?: TileKind } | undefined)?.kind;
     setDragKind(kind ?? null);
@@ -182,7 +186,9 @@ export function PanelDesigner({ panel, canEdit, robotReads, robotNote, versions,
     const kind = (e.active.data.current as { kind?: TileKind } | undefined)?.kind;
     const { element, scale } = geometryRef.current;
     if (!kind || e.over?.id !== CANVAS_DROP_ID || !element || !String(e.active.id).startsWith(PALETTE_PREFIX)) return;
-    const start = e.activatorEvent as PointerEvent;
+    const activator = e.activatorEvent;
+    const start = typeof TouchEvent !== 'undefined' && activator instanceof TouchEvent ? (activator.touches[0] ?? activator.changedTouches[0]) : (activator as MouseEvent | null);
+    if (!start) return;
     const rect = element.getBoundingClientRect();
     // The pointer now: where it went down plus how far it moved; into the canvas's own CSS px.
     const xPx = (start.clientX + e.delta.x - rect.left) / scale;

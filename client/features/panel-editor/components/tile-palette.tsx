@@ -46,7 +46,7 @@ function PaletteItem({ kind, onAdd, isDisabled }: { kind: TileKind; onAdd: (kind
       onClick={() => onAdd(kind)}
       title={entry.description}
       className={cx(
-        'group flex min-h-11 w-full touch-none items-center gap-2.5 rounded-lg px-2 py-1.5 text-left text-sm font-semibold text-asphalt-200 ring-1 ring-transparent transition-colors select-none ring-inset',
+        'group flex min-h-11 w-full touch-manipulation items-center gap-2.5 rounded-lg px-2 py-1.5 text-left text-sm font-semibold text-asphalt-200 ring-1 ring-transparent transition-colors select-none ring-inset',
         'hover:bg-asphalt-750 hover:text-asphalt-100 hover:ring-asphalt-600 disabled:cursor-not-allowed disabled:opacity-50',
         isDragging ? 'cursor-grabbing bg-asphalt-750 opacity-50' : 'cursor-grab',
       )}
