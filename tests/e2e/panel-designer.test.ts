@@ -222,14 +222,14 @@ describe('the panel designer through the UI', () => {
     const page = await signIn('operator');
     await page.goto(`${stack.server.url}/panels`);
     await page.getByText('Read only').first().waitFor();
-    await page.locator('tr', { hasText: 'Lakeshore quals panel' }).waitFor();
+    await page.locator('tr', { hasText: 'Gullwing match panel' }).waitFor();
     expect(await page.getByRole('button', { name: 'New panel' }).count()).toBe(0);
     expect(await page.getByRole('link', { name: /^Edit / }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /^(Rename|Duplicate|Delete) / }).count()).toBe(0);
     expect(await page.getByRole('link', { name: /^View / }).count()).toBeGreaterThan(0);
     await page.screenshot({ path: path.join(SHOTS, 'panels-library-operator.png'), fullPage: true });
     // Opening a panel shows it without the palette or save.
-    await page.getByRole('link', { name: 'View Lakeshore quals panel' }).click();
+    await page.getByRole('link', { name: 'View Gullwing match panel' }).click();
     await page.getByTestId('design-canvas').waitFor();
     expect(await page.getByRole('navigation', { name: 'Tile palette' }).count()).toBe(0);
     await page.screenshot({ path: path.join(SHOTS, 'panel-designer-read-only.png') });

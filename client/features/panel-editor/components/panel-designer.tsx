@@ -324,7 +324,9 @@ export function PanelDesigner({ panel, canEdit, robotReads, robotNote, versions,
                   </div>
                 </details>
                 <p className="text-sm text-asphalt-400">
-                  Select a tile to edit it. Keys on the canvas: arrows nudge a cell (Shift: four), Delete removes, Ctrl+D duplicates, Ctrl+Z undoes, Shift+Ctrl+Z redoes.
+                  {canEdit
+                    ? 'Select a tile to edit it. Keys on the canvas: arrows nudge a cell (Shift: four), Delete removes, Ctrl+D duplicates, Ctrl+Z undoes, Shift+Ctrl+Z redoes.'
+                    : 'You can look at this panel, its versions and its channel contract. Programmers and leads edit and publish panels.'}
                 </p>
               </>
             )}
