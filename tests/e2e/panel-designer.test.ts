@@ -94,6 +94,10 @@ describe('the panel designer through the UI', () => {
     await clash.first().waitFor();
     await expect.poll(() => page.locator('[data-design-tile][data-issue="error"]').count()).toBe(2);
     await page.screenshot({ path: path.join(SHOTS, 'panel-designer-check-issue.png') });
+    // Picking the issue selects both tiles it names.
+    await clash.first().click();
+    await expect.poll(() => page.locator('[data-design-tile][data-selected]').count()).toBe(2);
+    await page.locator('[data-design-tile]').nth(1).click();
     // A channel that is not a channel gets an inline message and is not applied.
     await channel.fill('reef level');
     await expect.poll(() => page.getByText('A channel is op/… or robot/…').isVisible()).toBe(true);
@@ -135,6 +139,18 @@ describe('the panel designer through the UI', () => {
     await contract.getByRole('tab', { name: 'Java' }).click();
     await expect.poll(() => contract.getByRole('tabpanel').textContent()).toContain('public static final String');
     await contract.getByRole('button', { name: 'Close' }).click();
+
+    // Restoring v1 loads it as the working copy; leaving then asks first, and Undo brings v2's tiles back.
+    await page.getByRole('button', { name: 'Versions' }).click();
+    await versions.getByRole('button', { name: 'Restore v1 into the designer' }).click();
+    await expect.poll(() => page.locator('[data-design-tile]').count()).toBe(0);
+    await expect.poll(() => page.getByTestId('save-status').textContent()).toContain('Unsaved changes');
+    await page.getByRole('link', { name: 'Panels' }).click();
+    const leave = page.getByRole('dialog', { name: 'Leave without saving?' });
+    await leave.getByRole('button', { name: 'Cancel' }).click();
+    await page.getByRole('button', { name: 'Undo (Ctrl+Z)' }).click();
+    await expect.poll(() => page.locator('[data-design-tile]').count()).toBe(2);
+    await expect.poll(() => page.getByTestId('save-status').textContent()).not.toContain('Unsaved');
 
     await page.getByRole('link', { name: 'Panels' }).click();
     const row = page.locator('tr', { hasText: 'Lakeshore quals panel' });
