@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { can, ROLE_LABELS, ROLE_SUMMARIES } from '../../../shared/domain/roles';
+import { ButtonLink } from '../../components/ui/button-link';
 import { Icon } from '../../components/ui/icon';
 import { PageHeader } from '../../components/ui/page-header';
 import { Section } from '../../components/ui/section';
@@ -28,7 +29,7 @@ export function Component() {
       <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <Section
           title="What Pitwall does for the team"
-          description="Each area says what it does and who on the subteam uses it. Those marked soon arrive in coming releases."
+          description="Each area says what it does and who on the subteam uses it."
         >
           <ul className="grid gap-3 sm:grid-cols-2">
             {AREAS.map((area) => (
@@ -58,6 +59,13 @@ export function Component() {
           {isManager && (
             <Section title="Set up the team" description="Two steps before the first practice.">
               <TeamSetup />
+            </Section>
+          )}
+          {can(me.role, 'panels.run') && (
+            <Section title="At the driver station" description="The team’s published panel, full screen on the tablet. After the first visit it opens without a network.">
+              <ButtonLink to="/run" variant="primary">
+                Open run mode
+              </ButtonLink>
             </Section>
           )}
           <Section title="On the team">

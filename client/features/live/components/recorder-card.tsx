@@ -23,26 +23,30 @@ export function RecorderCard({ canRecord }: { canRecord: boolean }) {
       {robots.length === 0 && <p className="text-[0.9375rem] text-asphalt-400">Nothing to record until a robot connects.</p>}
       <ul className="flex flex-col gap-2">
         {robots.map((r) => (
-          <li key={r.robot} className="flex flex-wrap items-center gap-x-3 gap-y-2 rounded-lg bg-asphalt-900 px-3 py-2.5 ring-1 ring-asphalt-750">
-            <div className="min-w-0 flex-1">
-              <p className="font-semibold text-asphalt-100">{r.robot}</p>
+          <li key={r.robot} className="flex flex-col gap-2.5 rounded-lg bg-asphalt-900 px-3 py-2.5 ring-1 ring-asphalt-750">
+            <div className="min-w-0">
+              <p className="truncate font-semibold text-asphalt-100">{r.robot}</p>
               <RobotLine robot={r} />
             </div>
-            {r.recording?.recordingId && (
-              <ButtonLink size="sm" variant="primary" to={`/recordings/${r.recording.recordingId}`}>
-                Watch live
-              </ButtonLink>
+            {(r.recording?.recordingId || canRecord) && (
+              <div className="flex flex-wrap gap-2">
+                {r.recording?.recordingId && (
+                  <ButtonLink size="sm" variant="primary" to={`/recordings/${r.recording.recordingId}`}>
+                    Watch live
+                  </ButtonLink>
+                )}
+                {canRecord &&
+                  (r.recording ? (
+                    <Button size="sm" isPending={stop.isPending && stop.variables === r.robot} onClick={() => stop.mutate(r.robot)}>
+                      Stop recording
+                    </Button>
+                  ) : (
+                    <Button size="sm" isPending={start.isPending && start.variables === r.robot} onClick={() => start.mutate(r.robot)}>
+                      Record now
+                    </Button>
+                  ))}
+              </div>
             )}
-            {canRecord &&
-              (r.recording ? (
-                <Button size="sm" isPending={stop.isPending && stop.variables === r.robot} onClick={() => stop.mutate(r.robot)}>
-                  Stop recording
-                </Button>
-              ) : (
-                <Button size="sm" isPending={start.isPending && start.variables === r.robot} onClick={() => start.mutate(r.robot)}>
-                  Record now
-                </Button>
-              ))}
           </li>
         ))}
       </ul>
