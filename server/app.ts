@@ -127,6 +127,10 @@ export function createApp(deps: AppDeps): App {
   if (deps.clientDir && existsSync(path.join(deps.clientDir, 'index.html'))) {
     const clientDir = deps.clientDir;
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Run mode's addresses get its own light page (client/run.html: no React Router); the rest the app's.
+    if (existsSync(path.join(clientDir, 'run.html'))) {
+      app.get(['/run', '/panels/:id/run'], (_req, res) => res.sendFile(path.join(clientDir, 'run.html')));
+    }
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
   }
   app.use(errorHandler(deps.logger));

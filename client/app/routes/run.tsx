@@ -1,5 +1,4 @@
-import { useState } from 'react';
-import { Navigate, useLocation, useParams } from 'react-router-dom';
+import { useEffect, useState } from 'react';
 import { can } from '../../../shared/domain/roles';
 import { useMe } from '../../features/auth/api/me';
 import { signInPathFor } from '../../features/auth/model/safe-next-path';
@@ -15,8 +14,29 @@ import { SafetyCaution } from '../safety-caution';
 
 type Loaded = { isPending: boolean; isError: boolean; error: unknown; data: RunPanel | undefined; refetch: () => unknown; isFetching: boolean };
 
+// No React Router here: run mode is its own light page (client/run.html, client/app/run-main.tsx) and also an
+// in-app route of the full app, so it reads the address from `location` and leaves by plain links.
+
+/** The panel id in `/panels/:id/run`, or undefined for any other address. */
+export function runPanelIdFrom(pathname: string): string | undefined {
+  const match = /^\/panels\/([^/]+)\/run\/?$/.exec(pathname);
+  if (!match) return undefined;
+  try {
+    return decodeURIComponent(match[1]!);
+  } catch {
+    return undefined;
+  }
+}
+
+/** The session ended: a full page load to sign-in, which comes back here afterwards. */
+function SignInFirst({ backHref }: { backHref: string }) {
+  useEffect(() => {
+    window.location.replace(signInPathFor(window.location.pathname, window.location.search));
+  }, []);
+  return <RunMessage isBusy title="Opening sign-in…" backHref={backHref} />;
+}
+
 function RunGate({ query, backHref, offline }: { query: Loaded; backHref: string; offline?: OfflineState }) {
-  const location = useLocation();
   // Ready for the first tap sooner: the relay link and the season profile (for the reef) start while the
   // panel itself loads, instead of after it.
   useRunRelayWarmUp();
@@ -25,7 +45,7 @@ function RunGate({ query, backHref, offline }: { query: Loaded; backHref: string
   // A failed re-check keeps the panel that is running: only a first load that fails shows a message.
   if (!query.data) {
     const status = isApiError(query.error) ? query.error.status : 0;
-    if (status === 401) return <Navigate to={signInPathFor(location.pathname, location.search)} replace />;
+    if (status === 401) return <SignInFirst backHref={backHref} />;
     if (status === 403) return <ForbiddenMessage backHref={backHref} />;
     if (status === 404)
       return (
@@ -82,8 +102,8 @@ export function Component() {
 }
 
 /** `/panels/:id/run`: that panel's published version, else its latest as a draft (programmers testing). */
-export function PanelRunComponent() {
-  const { id = '' } = useParams();
+export function PanelRunComponent({ panelId }: { panelId?: string }) {
+  const id = panelId ?? runPanelIdFrom(window.location.pathname) ?? '';
   const me = useMe();
   const panel = useRunPanel(id);
   const backHref = `/panels/${id}/edit`;

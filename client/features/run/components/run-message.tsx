@@ -1,5 +1,4 @@
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
 import { LogoMark } from '../../../components/ui/logo';
 import { Spinner } from '../../../components/ui/spinner';
 
@@ -25,9 +24,9 @@ export function RunMessage({ title, children, tone = 'neutral', isBusy = false, 
         {children ? <div className="text-lg leading-relaxed text-asphalt-300">{children}</div> : null}
         <div className="mt-2 flex flex-wrap items-center justify-center gap-3">
           {action}
-          <Link to={backHref} className="inline-flex min-h-12 items-center rounded-lg px-5 text-lg font-semibold text-asphalt-200 ring-1 ring-asphalt-600 hover:bg-asphalt-800">
+          <a href={backHref} className="inline-flex min-h-12 items-center rounded-lg px-5 text-lg font-semibold text-asphalt-200 ring-1 ring-asphalt-600 hover:bg-asphalt-800">
             Back to Pitwall
-          </Link>
+          </a>
         </div>
       </div>
     </main>

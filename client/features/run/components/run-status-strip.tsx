@@ -1,5 +1,4 @@
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
 import type { Theme } from '../../../../shared/schemas/panel';
 import type { RelayLinkView, RobotLinkView } from '../model/run-view';
 import { LinkPill, type PillTone } from './link-pill';
@@ -28,14 +27,14 @@ export function RunStatusStrip(props: RunStatusStripProps) {
   const { theme, relay, robot } = props;
   return (
     <header className="flex h-14 shrink-0 items-center gap-2 px-2" style={{ background: theme.surface, color: theme.text, boxShadow: `0 1px 0 ${theme.muted}44` }}>
-      <Link
-        to={props.backHref}
+      <a
+        href={props.backHref}
         aria-label="Leave run mode, back to Pitwall"
         className="inline-flex min-h-10 items-center gap-1 rounded-lg px-2.5 text-[15px] font-semibold"
         style={{ color: theme.muted }}
       >
         <span aria-hidden="true">‹</span> <span className="max-[1150px]:sr-only">Pitwall</span>
-      </Link>
+      </a>
       <div className="flex min-w-0 shrink flex-col leading-tight">
         <span className="truncate text-[15px] font-bold">{props.panelName}</span>
         <span className="text-xs" style={{ color: theme.muted }}>
