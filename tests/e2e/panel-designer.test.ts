@@ -115,6 +115,13 @@ describe('the panel designer through the UI', () => {
     await page.keyboard.press('Control+Shift+z');
     await expect.poll(() => level.getAttribute('aria-label')).toContain('at column 9, row 2');
 
+    // A rectangle drawn on the empty canvas selects both tiles; align their bottom edges (the level picker is
+    // 4 cells tall, the reef picker 5, so the level picker moves down one row).
+    await dragFromTo(page, await canvasPoint(page, 20, 20), await canvasPoint(page, 900, 500), 12);
+    await expect.poll(() => page.locator('[data-design-tile][data-selected]').count()).toBe(2);
+    await page.getByRole('button', { name: 'Align bottom edges' }).click();
+    await expect.poll(() => level.getAttribute('aria-label')).toContain('at column 9, row 3');
+
     await page.getByLabel('Note for this version (optional)').fill('Reef and level pickers');
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await expect.poll(() => page.getByTestId('save-status').textContent()).toContain('Saved as v2');
@@ -238,14 +245,14 @@ describe('the panel designer through the UI', () => {
     const page = await signIn('operator');
     await page.goto(`${stack.server.url}/panels`);
     await page.getByText('Read only').first().waitFor();
-    await page.locator('tr', { hasText: 'Gullwing match panel' }).waitFor();
+    await page.getByRole('link', { name: 'Gullwing match panel', exact: true }).waitFor();
     expect(await page.getByRole('button', { name: 'New panel' }).count()).toBe(0);
     expect(await page.getByRole('link', { name: /^Edit / }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /^(Rename|Duplicate|Delete) / }).count()).toBe(0);
     expect(await page.getByRole('link', { name: /^View / }).count()).toBeGreaterThan(0);
     await page.screenshot({ path: path.join(SHOTS, 'panels-library-operator.png'), fullPage: true });
     // Opening a panel shows it without the palette or save.
-    await page.getByRole('link', { name: 'View Gullwing match panel' }).click();
+    await page.getByRole('link', { name: 'View Gullwing match panel', exact: true }).click();
     await page.getByTestId('design-canvas').waitFor();
     expect(await page.getByRole('navigation', { name: 'Tile palette' }).count()).toBe(0);
     await page.screenshot({ path: path.join(SHOTS, 'panel-designer-read-only.png') });

@@ -5,7 +5,7 @@ import type { ResizeHandle } from '../../../../shared/domain/panels/layout';
 import type { PanelIssue } from '../../../../shared/domain/panels/check';
 import type { Page, PanelDocument } from '../../../../shared/schemas/panel';
 import type { EditorAction } from '../model/editor-state';
-import { dragPreview, dropRects, IDLE, pointerCancel, pointerDown, pointerMove, pointerUp, resizePreview, resizeRect, type Gesture } from '../model/gesture';
+import { canvasPointerDown, dragPreview, dropRects, IDLE, marqueeRectPx, pointerCancel, pointerDown, pointerMove, pointerUp, resizePreview, resizeRect, type Gesture } from '../model/gesture';
 import { keyIntent } from '../model/keyboard';
 import { DesignTile, type TileMark } from './design-tile';
 
@@ -101,7 +101,7 @@ export function DesignCanvas({ doc, page, selection, issues, canEdit, dispatch, 
   const onPointerUp = (e: PointerEvent<HTMLDivElement>) => {
     const g = gestureRef.current;
     if (g.phase === 'idle') return;
-    const step = pointerUp(g, { pointerId: e.pointerId }, cell, selection);
+    const step = pointerUp(g, { pointerId: e.pointerId }, cell, selection, page);
     setGesture(step.gesture);
     step.actions.forEach(dispatch);
   };
@@ -149,6 +149,7 @@ export function DesignCanvas({ doc, page, selection, issues, canEdit, dispatch, 
   const ghosts = drag ? dropRects(doc, page.id, drag) : resize ? [resizeRect(doc, page.id, resize)].filter((r) => r !== null) : [];
   const single = selection.length === 1 && gesture.phase !== 'dragging' ? selection[0] : undefined;
   const dragOffset = drag ? { xPx: drag.dxPx, yPx: drag.dyPx } : null;
+  const marquee = marqueeRectPx(gesture);
 
   return (
     <div ref={areaRef} className="relative grid min-h-0 min-w-0 flex-1 place-items-center overflow-hidden bg-asphalt-950/60">
@@ -173,7 +174,13 @@ export function DesignCanvas({ doc, page, selection, issues, canEdit, dispatch, 
             outline: isOver ? `3px solid var(--color-signal-400)` : undefined,
           }}
           onPointerDown={(e) => {
-            if (e.target === e.currentTarget) dispatch({ type: 'clear-selection' });
+            if (e.target !== e.currentTarget || e.button !== 0) return;
+            const step = canvasPointerDown(gestureRef.current, { pointerId: e.pointerId, ...toDevicePx(e.clientX, e.clientY), shiftKey: e.shiftKey });
+            step.actions.forEach(dispatch);
+            if (step.gesture !== gestureRef.current) {
+              e.currentTarget.setPointerCapture(e.pointerId);
+              setGesture(step.gesture);
+            }
           }}
           onPointerMove={onPointerMove}
           onPointerUp={onPointerUp}
@@ -205,6 +212,14 @@ export function DesignCanvas({ doc, page, selection, issues, canEdit, dispatch, 
               style={{ left: r.x * cell.widthPx, top: r.y * cell.heightPx, width: r.w * cell.widthPx, height: r.h * cell.heightPx }}
             />
           ))}
+          {marquee && (
+            <div
+              aria-hidden="true"
+              data-testid="marquee"
+              className="pointer-events-none absolute rounded-sm border-2 border-sky bg-sky/10"
+              style={{ left: marquee.xPx, top: marquee.yPx, width: marquee.widthPx, height: marquee.heightPx }}
+            />
+          )}
           {page.tiles.length === 0 && (
             <div className="pointer-events-none absolute inset-0 grid place-items-center p-10 text-center">
               <p className="max-w-md rounded-xl bg-asphalt-900/85 px-6 py-5 text-lg text-asphalt-200 ring-1 ring-asphalt-600">

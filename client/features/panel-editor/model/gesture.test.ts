@@ -3,7 +3,7 @@ import { findTile } from '../../../../shared/domain/panels/layout';
 import { presetDevice, starterPanelDocument } from '../../../../shared/domain/panels/starter-panel';
 import { cellSize } from '../../../../shared/domain/panels/grid';
 import { editorReducer, initialEditorState, type EditorAction, type EditorState } from './editor-state';
-import { dragPreview, IDLE, pointerCancel, pointerDown, pointerMove, pointerUp, type Gesture } from './gesture';
+import { canvasPointerDown, dragPreview, IDLE, marqueeRectPx, pointerCancel, pointerDown, pointerMove, pointerUp, type Gesture } from './gesture';
 
 const doc = starterPanelDocument(presetDevice('tablet-1280x800'));
 // 1280 × 800 over 16 × 10 cells: 80 px square cells.
@@ -105,5 +105,29 @@ describe('the canvas gesture', () => {
     s = pointerUp(gesture, { pointerId: 1 }, cell, s.selection).actions.reduce(editorReducer, s);
     const small = findTile(s.history.present, s.pageId, 'a')!;
     expect([small.w, small.h]).toEqual([1, 1]);
+  });
+
+  it('selects the tiles a rectangle drawn on the empty canvas touches, and adds to the selection with Shift', () => {
+    let s = setup();
+    // Lamps a (cells 0–1 × 0) and b (cells 4–5 × 0) on 80 px cells; a rectangle from (100, 90) up to (10, 10) touches only a.
+    let step = canvasPointerDown(IDLE, { pointerId: 3, xPx: 100, yPx: 90, shiftKey: false });
+    s = step.actions.reduce(editorReducer, s);
+    let g = pointerMove(step.gesture, { pointerId: 3, xPx: 10, yPx: 10 }, s.selection);
+    expect(marqueeRectPx(g)).toEqual({ xPx: 10, yPx: 10, widthPx: 90, heightPx: 80 });
+    s = pointerUp(g, { pointerId: 3 }, cell, s.selection, s.history.present.pages[0]).actions.reduce(editorReducer, s);
+    expect(s.selection).toEqual(['a']);
+    step = canvasPointerDown(IDLE, { pointerId: 3, xPx: 330, yPx: 70, shiftKey: true });
+    expect(step.actions).toEqual([]);
+    g = pointerMove(step.gesture, { pointerId: 3, xPx: 400, yPx: 20 }, s.selection);
+    s = pointerUp(g, { pointerId: 3 }, cell, s.selection, s.history.present.pages[0]).actions.reduce(editorReducer, s);
+    expect(s.selection).toEqual(['a', 'b']);
+  });
+
+  it('clears the selection on a plain press on the empty canvas', () => {
+    let s = play(setup(), [['down', 'a', 10, 10], ['up']]).s;
+    const step = canvasPointerDown(IDLE, { pointerId: 1, xPx: 700, yPx: 500, shiftKey: false });
+    s = step.actions.reduce(editorReducer, s);
+    expect(s.selection).toEqual([]);
+    expect(pointerUp(step.gesture, { pointerId: 1 }, cell, s.selection, s.history.present.pages[0]).actions).toEqual([]);
   });
 });

@@ -2,7 +2,7 @@
 // Positions are device CSS px (the canvas's own pixels, already divided by its on-screen scale). The machine
 // never edits the document: it answers with editor actions, and a drag commits once, on release.
 import { findPage, findTile, groupOffset, resizedRect, snapOffset, type CellRect, type ResizeHandle } from '../../../../shared/domain/panels/layout';
-import type { PanelDocument } from '../../../../shared/schemas/panel';
+import type { Page, PanelDocument } from '../../../../shared/schemas/panel';
 import { minSizeOf, type EditorAction } from './editor-state';
 
 export type GestureTarget = { kind: 'move'; tileId: string } | { kind: 'resize'; tileId: string; handle: ResizeHandle };
@@ -11,7 +11,9 @@ export type Gesture =
   | { phase: 'idle' }
   | { phase: 'pointing'; pointerId: number; target: GestureTarget; startXPx: number; startYPx: number; isToggle: boolean; wasSelected: boolean }
   | { phase: 'dragging'; pointerId: number; tileIds: readonly string[]; startXPx: number; startYPx: number; dxPx: number; dyPx: number }
-  | { phase: 'resizing'; pointerId: number; tileId: string; handle: ResizeHandle; startXPx: number; startYPx: number; dxPx: number; dyPx: number };
+  | { phase: 'resizing'; pointerId: number; tileId: string; handle: ResizeHandle; startXPx: number; startYPx: number; dxPx: number; dyPx: number }
+  /** A press on the empty canvas: a selection rectangle; with Shift it adds to the selection. */
+  | { phase: 'marquee'; pointerId: number; startXPx: number; startYPx: number; dxPx: number; dyPx: number; isAdding: boolean };
 
 export const IDLE: Gesture = { phase: 'idle' };
 
@@ -39,6 +41,32 @@ export function pointerDown(g: Gesture, p: PointerInput & { target: GestureTarge
   };
 }
 
+/** Pointer-down on the empty canvas: starts a selection rectangle (without Shift the selection clears). */
+export function canvasPointerDown(g: Gesture, p: PointerInput & { shiftKey: boolean }): Step {
+  if (g.phase !== 'idle') return { gesture: g, actions: [] };
+  return {
+    gesture: { phase: 'marquee', pointerId: p.pointerId, startXPx: p.xPx, startYPx: p.yPx, dxPx: 0, dyPx: 0, isAdding: p.shiftKey },
+    actions: p.shiftKey ? [] : [{ type: 'clear-selection' }],
+  };
+}
+
+/** The selection rectangle in device px, normalised to a positive size. */
+export function marqueeRectPx(g: Gesture): { xPx: number; yPx: number; widthPx: number; heightPx: number } | null {
+  if (g.phase !== 'marquee' || Math.hypot(g.dxPx, g.dyPx) < DRAG_THRESHOLD_PX) return null;
+  return { xPx: Math.min(g.startXPx, g.startXPx + g.dxPx), yPx: Math.min(g.startYPx, g.startYPx + g.dyPx), widthPx: Math.abs(g.dxPx), heightPx: Math.abs(g.dyPx) };
+}
+
+/** The tiles of a page that a rectangle (device px) touches. */
+export function tilesInRect(page: Page, rect: { xPx: number; yPx: number; widthPx: number; heightPx: number }, cell: CellPx): string[] {
+  return page.tiles
+    .filter((t) => {
+      const left = t.x * cell.widthPx;
+      const top = t.y * cell.heightPx;
+      return left < rect.xPx + rect.widthPx && rect.xPx < left + t.w * cell.widthPx && top < rect.yPx + rect.heightPx && rect.yPx < top + t.h * cell.heightPx;
+    })
+    .map((t) => t.id);
+}
+
 /** Pointer-move: past the threshold a press becomes a drag (of the whole selection) or a resize. */
 export function pointerMove(g: Gesture, p: PointerInput, selection: readonly string[]): Gesture {
   if (g.phase === 'idle' || g.pointerId !== p.pointerId) return g;
@@ -58,10 +86,15 @@ export function pointerMove(g: Gesture, p: PointerInput, selection: readonly str
   return { ...g, dxPx, dyPx };
 }
 
-/** Pointer-up: a drag or resize commits as one action in whole cells; a plain click picks one tile of several. */
-export function pointerUp(g: Gesture, p: Pick<PointerInput, 'pointerId'>, cell: CellPx, selection: readonly string[]): Step {
+/** Pointer-up: a drag or resize commits as one action in whole cells; a plain click picks one tile of several; a rectangle selects what it touches. */
+export function pointerUp(g: Gesture, p: Pick<PointerInput, 'pointerId'>, cell: CellPx, selection: readonly string[], page?: Page): Step {
   if (g.phase === 'idle' || g.pointerId !== p.pointerId) return { gesture: g, actions: [] };
   switch (g.phase) {
+    case 'marquee': {
+      const rect = marqueeRectPx(g);
+      if (!rect || !page) return { gesture: IDLE, actions: [] };
+      return { gesture: IDLE, actions: [{ type: 'select', ids: tilesInRect(page, rect, cell), mode: g.isAdding ? 'add' : 'replace' }] };
+    }
     case 'pointing': {
       const isPickOne = !g.isToggle && g.target.kind === 'move' && g.wasSelected && selection.length > 1;
       return { gesture: IDLE, actions: isPickOne ? [{ type: 'select', ids: [g.target.tileId], mode: 'replace' }] : [] };
