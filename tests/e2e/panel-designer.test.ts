@@ -195,6 +195,11 @@ describe('the panel designer through the UI', () => {
     await conflict.getByRole('button', { name: 'Keep mine (save on top)' }).click();
     await expect.poll(() => second.getByTestId('save-status').textContent()).toContain('Saved as v3');
     await expect.poll(() => second.locator('[data-design-tile]').count()).toBe(2);
+    // The readout placed last is still selected: its form has the unit, decimals and thresholds.
+    await expect.poll(() => second.getByLabel('Decimals').inputValue()).toBe('1');
+    await second.getByLabel('Danger at (V)').fill('11.8');
+    await expect.poll(() => second.getByText('When low is bad, the danger value is below the warn value').isVisible()).toBe(true);
+    await second.screenshot({ path: path.join(SHOTS, 'panel-designer-readout.png') });
     await first.context().close();
     await second.context().close();
   });

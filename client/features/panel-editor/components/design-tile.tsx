@@ -114,7 +114,7 @@ const DesignTileBody = memo(function DesignTileBody({
               key={h.handle}
               data-handle={h.handle}
               aria-hidden="true"
-              className={cx('absolute size-5 rounded-[4px] bg-signal-400 ring-2 ring-asphalt-950', h.className)}
+              className={cx('absolute size-4 rounded-[3px] bg-signal-400 ring-2 ring-asphalt-950', h.className)}
               style={{ cursor: h.cursor }}
               onPointerDown={(e) => {
                 e.stopPropagation();
