@@ -246,6 +246,33 @@ describe('the panel designer through the UI', () => {
     await page.context().close();
   });
 
+  it('adds, renames, reorders and deletes pages', async () => {
+    const page = await signIn('programmer');
+    await page.goto(`${stack.server.url}/panels`);
+    await page.getByRole('link', { name: 'Edit Practice layout', exact: true }).click();
+    await page.getByTestId('design-canvas').waitFor();
+    const tabs = page.getByRole('tablist', { name: 'Pages' }).getByRole('tab');
+    const before = await tabs.count();
+    // A tab reads "<name>, <n> tiles".
+    const first = (await tabs.first().textContent())!.split(',')[0]!;
+    await page.getByRole('button', { name: '+ Page' }).click();
+    await expect.poll(() => tabs.count()).toBe(before + 1);
+    await expect.poll(() => tabs.last().getAttribute('aria-selected')).toBe('true');
+    expect(await page.locator('[data-design-tile]').count()).toBe(0);
+    await page.getByRole('button', { name: /^Rename page/ }).click();
+    await page.getByLabel('Page name').fill('Auto routine');
+    await page.getByLabel('Page name').press('Enter');
+    await expect.poll(() => tabs.last().textContent()).toMatch(/^Auto routine/);
+    for (let i = 0; i < before; i += 1) await page.getByRole('button', { name: 'Move page “Auto routine” left' }).click();
+    await expect.poll(() => tabs.first().textContent()).toMatch(/^Auto routine/);
+    await expect.poll(() => tabs.nth(1).textContent()).toMatch(new RegExp(`^${first}`));
+    await page.getByRole('button', { name: 'Delete page “Auto routine”' }).click();
+    await expect.poll(() => tabs.count()).toBe(before);
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => tabs.count()).toBe(before + 1);
+    await page.context().close();
+  });
+
   it('gives an operator a read-only library', async () => {
     const page = await signIn('operator');
     await page.goto(`${stack.server.url}/panels`);

@@ -68,6 +68,22 @@ export function PageTabs({ doc, pageId, canEdit, dispatch, newPageId }: PageTabs
             <IconButton label={`Rename page “${current.name}”`} onClick={() => setRenaming({ id: current.id, name: current.name })} path="M3 13l1-3.5L11 2.5l2.5 2.5L6.5 12 3 13ZM9.5 4l2.5 2.5" />
           )}
           {current && doc.pages.length > 1 && (
+            <>
+              <IconButton
+                label={`Move page “${current.name}” left`}
+                isDisabled={doc.pages[0]!.id === current.id}
+                onClick={() => dispatch({ type: 'move-page', pageId: current.id, toIndex: doc.pages.indexOf(current) - 1 })}
+                path="M10 3 5 8l5 5"
+              />
+              <IconButton
+                label={`Move page “${current.name}” right`}
+                isDisabled={doc.pages[doc.pages.length - 1]!.id === current.id}
+                onClick={() => dispatch({ type: 'move-page', pageId: current.id, toIndex: doc.pages.indexOf(current) + 1 })}
+                path="M6 3l5 5-5 5"
+              />
+            </>
+          )}
+          {current && doc.pages.length > 1 && (
             <IconButton
               label={`Delete page “${current.name}”`}
               onClick={() => (current.tiles.length === 0 ? dispatch({ type: 'delete-page', pageId: current.id }) : setDeleting(current.id))}
