@@ -80,6 +80,9 @@ describe('run mode', () => {
     });
     await page.goto(`${stack.server.url}/run`);
     await page.getByText('Gullwing match panel').waitFor();
+    // /run is run mode's own light page (client/run.html), not the app's; its way back is a plain link.
+    expect(await page.title()).toBe('Pitwall · Run mode');
+    expect(await page.getByRole('link', { name: 'Leave run mode, back to Pitwall' }).getAttribute('href')).toBe('/');
     await relayPill().getByText('Relay connected').waitFor();
     await page.getByTestId('simulator-band').waitFor();
     await page.getByRole('status', { name: 'Robot link' }).getByText('Robot Gullwing').waitFor();
@@ -208,6 +211,7 @@ describe('run mode', () => {
     isCablePulled = true;
     await page.reload();
     await page.getByText('Gullwing match panel').waitFor();
+    expect(await page.title()).toBe('Pitwall · Run mode');
     // The reef comes from the season profile, kept by the service worker too.
     await page.locator('[data-tile-kind="reef-picker"] polygon').waitFor();
     expect(await page.getByRole('button', { name: /^Branch [A-L]$/ }).count()).toBe(12);
