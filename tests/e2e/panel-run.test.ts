@@ -2,8 +2,8 @@
 // robot: the operator opens /run (the demo team's published panel), taps a branch and a level, sees the
 // robot has them with the round trip, and sees through the relay that the simulator took them and drives to
 // the branch; the relay socket is pulled and comes back with the selection re-sent; a viewer and a coach
-// get the 403 message; the panel opens again with no network; a robot that is not the simulator brings
-// up the safety caution.
+// get the 403 message; a signed-out visitor goes to sign-in and back; the panel opens again with no network;
+// a robot that is not the simulator brings up the safety caution.
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
@@ -69,6 +69,21 @@ describe('run mode', () => {
       if (role === 'viewer') await p.screenshot({ path: path.join(SHOTS, 'run-viewer-403.png') });
       await p.context().close();
     }
+  });
+
+  it('sends a signed-out visitor to sign-in and back to the panel afterwards', async () => {
+    const context = await stack.browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const p = await context.newPage();
+    await p.goto(`${stack.server.url}/run`);
+    await expect.poll(() => new URL(p.url()).pathname + new URL(p.url()).search).toBe('/sign-in?next=%2Frun');
+    await p.getByLabel('E-mail').fill('operator@harborlight.example');
+    await p.getByLabel('Password').fill(DEMO_PASSWORD);
+    await p.getByRole('button', { name: 'Sign in' }).click();
+    // Back at /run inside the app (its router keeps the run routes for in-app navigation).
+    await p.getByText('Gullwing match panel').waitFor();
+    expect(new URL(p.url()).pathname).toBe('/run');
+    expect(await p.getByRole('button', { name: /^Branch [A-L]$/ }).count()).toBe(12);
+    await context.close();
   });
 
   it('opens the published panel full screen for the operator, connected to the simulator', async () => {
