@@ -16,6 +16,10 @@ import { readEnv } from '../env';
 import { createLogger } from '../lib/logger';
 import { provideDatabase } from '../runtime';
 
+// PITWALL_BENCH_ONLY=relay,cycles runs only those groups: auth, relay, storage, api (with the browser cases), cycles.
+const only = new Set((process.env.PITWALL_BENCH_ONLY ?? '').split(',').map((x) => x.trim()).filter(Boolean));
+const runs = (group: 'auth' | 'relay' | 'storage' | 'api' | 'cycles') => only.size === 0 || only.has(group);
+
 const env = readEnv();
 const database = await provideDatabase(env, createLogger('warn'));
 const name = `pitwall_bench_${process.pid}`;
@@ -26,11 +30,28 @@ const handle = connectDb(withDatabase(database.url, name));
 try {
   await runMigrations(handle.db);
   process.stdout.write('Pitwall benchmarks (each figure per call; ratios against the baseline of this run)\n\n');
-  process.stdout.write(`auth and sessions\n${formatResults(await benchAuth(handle.db))}\n\n`);
+  if (runs('auth')) process.stdout.write(`auth and sessions\n${formatResults(await benchAuth(handle.db))}\n\n`);
   const fanoutSeconds = Number(process.env.PITWALL_BENCH_FANOUT_S ?? '60');
-  process.stdout.write(`relay\n${(await benchRelay({ databaseUrl: withDatabase(database.url, name), fanoutSeconds })).join('\n')}\n`);
-  const recordings = await benchRecordings(handle.db, { databaseUrl: withDatabase(database.url, name) });
-  process.stdout.write(`\nrecording storage\n${recordings.join('\n')}\n`);
+  if (runs('relay')) {
+    process.stdout.write(`relay\n${(await benchRelay({ databaseUrl: withDatabase(database.url, name), fanoutSeconds })).join('\n')}\n`);
+  }
+  if (runs('storage')) {
+    const recordings = await benchRecordings(handle.db, { databaseUrl: withDatabase(database.url, name) });
+    process.stdout.write(`\nrecording storage\n${recordings.join('\n')}\n`);
+  }
+  if (runs('api')) await benchApiAndBrowser();
+  if (runs('cycles')) {
+    process.stdout.write(`\ncycles\n${(await benchCycles(handle.db, { databaseUrl: withDatabase(database.url, name) })).join('\n')}\n`);
+  }
+} finally {
+  await handle.close();
+  await admin.query(`drop database if exists ${name} with (force)`);
+  await admin.end();
+  await database.stop();
+}
+
+/** The recordings API, then the browser cases on the same server and recording. */
+async function benchApiAndBrowser(): Promise<void> {
   const recordingsApi = await benchRecordingsApi({ databaseUrl: withDatabase(database.url, name), keepServer: true });
   process.stdout.write(`\nrecordings API\n${recordingsApi.lines.join('\n')}\n`);
   try {
@@ -43,10 +64,4 @@ try {
   } finally {
     await recordingsApi.server.stop();
   }
-  process.stdout.write(`\ncycles\n${(await benchCycles(handle.db, { databaseUrl: withDatabase(database.url, name) })).join('\n')}\n`);
-} finally {
-  await handle.close();
-  await admin.query(`drop database if exists ${name} with (force)`);
-  await admin.end();
-  await database.stop();
 }

@@ -92,6 +92,8 @@ export class TeamHub {
   fanout(channel: string, message: ServerMessage, lane: Lane, except?: RelaySession): void {
     const targets = this.subscribersOf(channel).filter((s) => s !== except);
     if (targets.length === 0) return;
+    // Robots act on op/ values: they get them before the panels and viewers that only watch.
+    if (channel.startsWith('op/')) targets.sort((a, b) => Number(b.kind === 'robot') - Number(a.kind === 'robot'));
     const bytes = encodeFrame(message);
     for (const s of targets) s.sendBytes(bytes, lane);
   }
