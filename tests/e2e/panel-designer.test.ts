@@ -282,6 +282,8 @@ describe('the panel designer through the UI', () => {
     expect(await page.getByRole('link', { name: /^Edit / }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /^(Rename|Duplicate|Delete) / }).count()).toBe(0);
     expect(await page.getByRole('link', { name: /^View / }).count()).toBeGreaterThan(0);
+    // Operators run panels: each row opens run mode.
+    expect(await page.getByRole('link', { name: 'Run Gullwing match panel', exact: true }).getAttribute('href')).toMatch(/^\/panels\/[0-9a-f-]{36}\/run$/);
     await page.screenshot({ path: path.join(SHOTS, 'panels-library-operator.png'), fullPage: true });
     // Opening a panel shows it without the palette or save.
     await page.getByRole('link', { name: 'View Gullwing match panel', exact: true }).click();

@@ -194,7 +194,8 @@ describe('run mode', () => {
     await page.getByRole('button', { name: 'Level L2' }).focus();
     await page.keyboard.press('Space');
     await until(() => sim!.model.selection.level === 'L2');
-    expect(await page.getByRole('button', { name: 'Level L2' }).getAttribute('aria-pressed')).toBe('true');
+    // The robot can have it a frame before the page draws it (the relay client flushes once per frame).
+    await expect.poll(() => page.getByRole('button', { name: 'Level L2' }).getAttribute('aria-pressed')).toBe('true');
     await page.getByRole('button', { name: 'Branch K' }).focus();
     await page.keyboard.press('Enter');
     await until(() => sim!.model.selection.branch === 'K');

@@ -17,7 +17,7 @@ export function Component() {
         title="Panels"
         description="The operator’s touch panels: tiles on a grid, each bound to a channel the robot code reads."
       />
-      <PanelLibrary canEdit={can(me.role, 'panels.edit')} nowMs={nowMs} />
+      <PanelLibrary canEdit={can(me.role, 'panels.edit')} canRun={can(me.role, 'panels.run')} nowMs={nowMs} />
     </>
   );
 }

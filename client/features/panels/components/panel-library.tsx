@@ -15,10 +15,10 @@ import { ImportPanelButton, ImportRefusalNotice, type ImportRefusal } from './im
 import { PanelsTable } from './panels-table';
 import { RenamePanelDialog } from './rename-panel-dialog';
 
-type PanelLibraryProps = { canEdit: boolean; nowMs: number };
+type PanelLibraryProps = { canEdit: boolean; canRun: boolean; nowMs: number };
 
 /** The team's panels: a table with create, rename, duplicate, delete, import and export by role. */
-export function PanelLibrary({ canEdit, nowMs }: PanelLibraryProps) {
+export function PanelLibrary({ canEdit, canRun, nowMs }: PanelLibraryProps) {
   const navigate = useNavigate();
   const list = usePanels();
   const [isCreating, setIsCreating] = useState(false);
@@ -86,6 +86,7 @@ export function PanelLibrary({ canEdit, nowMs }: PanelLibraryProps) {
           <PanelsTable
             panels={list.data}
             canEdit={canEdit}
+            canRun={canRun}
             nowMs={nowMs}
             highlightId={highlightId}
             duplicatingId={duplicate.isPending ? (duplicate.variables?.id ?? null) : null}

@@ -11,6 +11,8 @@ import { deviceName, exportFileName, publishedState } from '../model/library';
 type PanelsTableProps = {
   panels: readonly PanelSummary[];
   canEdit: boolean;
+  /** Operators, programmers and leads open a panel in run mode from here. */
+  canRun: boolean;
   nowMs: number;
   highlightId: string | null;
   onRename: (panel: PanelSummary) => void;
@@ -20,7 +22,7 @@ type PanelsTableProps = {
 };
 
 /** The team's panels, newest change first, with what the driver station runs. */
-export function PanelsTable({ panels, canEdit, nowMs, highlightId, onRename, onDuplicate, onDelete, duplicatingId }: PanelsTableProps) {
+export function PanelsTable({ panels, canEdit, canRun, nowMs, highlightId, onRename, onDuplicate, onDelete, duplicatingId }: PanelsTableProps) {
   const sorted = [...panels].sort((a, b) => b.latestVersion.createdAt.localeCompare(a.latestVersion.createdAt));
   return (
     <div className="overflow-x-auto rounded-tile ring-1 ring-asphalt-700">
@@ -43,6 +45,7 @@ export function PanelsTable({ panels, canEdit, nowMs, highlightId, onRename, onD
               key={p.id}
               panel={p}
               canEdit={canEdit}
+              canRun={canRun}
               nowMs={nowMs}
               isHighlighted={p.id === highlightId}
               isDuplicating={p.id === duplicatingId}
@@ -60,6 +63,8 @@ export function PanelsTable({ panels, canEdit, nowMs, highlightId, onRename, onD
 type PanelRowProps = {
   panel: PanelSummary;
   canEdit: boolean;
+  /** Operators, programmers and leads open a panel in run mode from here. */
+  canRun: boolean;
   nowMs: number;
   isHighlighted: boolean;
   isDuplicating: boolean;
@@ -68,7 +73,7 @@ type PanelRowProps = {
   onDelete: () => void;
 };
 
-function PanelRow({ panel: p, canEdit, nowMs, isHighlighted, isDuplicating, onRename, onDuplicate, onDelete }: PanelRowProps) {
+function PanelRow({ panel: p, canEdit, canRun, nowMs, isHighlighted, isDuplicating, onRename, onDuplicate, onDelete }: PanelRowProps) {
   const published = publishedState(p);
   const latest = p.latestVersion;
   return (
@@ -115,6 +120,12 @@ function PanelRow({ panel: p, canEdit, nowMs, isHighlighted, isDuplicating, onRe
           <Link to={`/panels/${p.id}/edit`} className={buttonClasses(canEdit ? 'primary' : 'secondary', 'sm')} aria-label={`${canEdit ? 'Edit' : 'View'} ${p.name}`}>
             {canEdit ? 'Edit' : 'View'}
           </Link>
+          {canRun && (
+            // A whole page load: run mode is its own light page.
+            <a href={`/panels/${p.id}/run`} className={buttonClasses('secondary', 'sm')} aria-label={`Run ${p.name}`} title={p.publishedVersion ? `Runs the published v${p.publishedVersion.number}` : 'Runs the newest version as a draft'}>
+              Run
+            </a>
+          )}
           {canEdit && (
             <>
               <Button size="sm" variant="ghost" onClick={onRename} aria-label={`Rename ${p.name}`}>
