@@ -1,23 +1,28 @@
 import { useCallback, useRef, useSyncExternalStore } from 'react';
 import type { ChannelValue } from '../../shared/protocol/messages';
 import type { SocketLike } from '../../shared/protocol/relay-link';
-import { RelayClient, type PublishTicket, type RelayState } from '../lib/relay-client';
+import { RelayClient, type PublishTicket, type RelayClientDeps, type RelayState } from '../lib/relay-client';
 
 let shared: RelayClient | undefined;
 
 const relayUrl = () => `${location.protocol === 'https:' ? 'wss' : 'ws'}://${location.host}/relay`;
 
-/** The app's one relay client, made on first use. Same origin, so the session cookie signs it in. */
+/** What a relay client needs from the browser: a same-origin socket (the session cookie signs it in), clocks, frames. */
+export function browserRelayDeps(): RelayClientDeps {
+  return {
+    connect: () => new WebSocket(relayUrl()) as unknown as SocketLike,
+    now: () => performance.timeOrigin + performance.now(),
+    setTimer: (fn, ms) => window.setTimeout(fn, ms),
+    clearTimer: (handle) => window.clearTimeout(handle as number),
+    random: Math.random,
+    scheduleFlush: (fn) => requestAnimationFrame(() => fn()),
+  };
+}
+
+/** The app's one relay client, made on first use. */
 export function relayClient(): RelayClient {
   shared ??= new RelayClient(
-    {
-      connect: () => new WebSocket(relayUrl()) as unknown as SocketLike,
-      now: () => performance.timeOrigin + performance.now(),
-      setTimer: (fn, ms) => window.setTimeout(fn, ms),
-      clearTimer: (handle) => window.clearTimeout(handle as number),
-      random: Math.random,
-      scheduleFlush: (fn) => requestAnimationFrame(() => fn()),
-    },
+    browserRelayDeps(),
     // A browser tab is a viewer to the relay: it gets a longer stale limit, because browsers slow the
     // timers of a tab in the background. Its role, not its kind, decides what it may publish.
     { hello: { kind: 'viewer', name: 'Live page' }, heartbeatMs: 250, staleMs: 1500 },

@@ -1,5 +1,6 @@
-import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
+import { useModal } from './use-modal';
 
 type ConfirmDialogProps = {
   isOpen: boolean;
@@ -15,19 +16,9 @@ type ConfirmDialogProps = {
 
 /** A modal question before a destructive step. Escape or Cancel backs out; focus starts on Cancel. */
 export function ConfirmDialog({ isOpen, title, children, confirmLabel, isPending, error, onConfirm, onCancel }: ConfirmDialogProps) {
-  const ref = useRef<HTMLDialogElement>(null);
   const cancelRef = useRef<HTMLButtonElement>(null);
+  const ref = useModal(isOpen, () => cancelRef.current?.focus());
   const titleId = useId();
-
-  useEffect(() => {
-    const dialog = ref.current;
-    if (!dialog) return;
-    if (isOpen && !dialog.open) {
-      dialog.showModal();
-      cancelRef.current?.focus();
-    }
-    if (!isOpen && dialog.open) dialog.close();
-  }, [isOpen]);
 
   return (
     <dialog

@@ -1,8 +1,9 @@
-import { useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { useMemo } from 'react';
 import { CALL_PART_CHANNELS, type CallPart } from '../../../../shared/domain/drills/drill-calls';
 import { deviceSize, fitScale } from '../../../../shared/domain/panels/grid';
 import type { ChannelValue } from '../../../../shared/protocol/messages';
 import type { Page, PanelDocument, Tile } from '../../../../shared/schemas/panel';
+import { useElementSize } from '../../../hooks/use-element-size';
 import { TileView, type TileLive } from '../../../components/panel-tiles/tile-view';
 import { tapFromTile } from '../model/drill-panel';
 
@@ -15,17 +16,7 @@ type PanelAnswerCanvasProps = {
 
 /** The published panel's page drawn in run mode at the largest size that fits; taps on its pickers answer the call. */
 export function PanelAnswerCanvas({ document, page, selection, onTap }: PanelAnswerCanvasProps) {
-  const areaRef = useRef<HTMLDivElement>(null);
-  const [area, setArea] = useState({ widthPx: 0, heightPx: 0 });
-  useLayoutEffect(() => {
-    const el = areaRef.current;
-    if (!el) return;
-    const measure = () => setArea({ widthPx: el.clientWidth, heightPx: el.clientHeight });
-    measure();
-    const observer = new ResizeObserver(measure);
-    observer.observe(el);
-    return () => observer.disconnect();
-  }, []);
+  const [areaRef, area] = useElementSize<HTMLDivElement>();
   const screen = deviceSize(document.device);
   const scale = fitScale(document.device, area, true);
   // The drill shows the operator's own selection since the call; nothing here reaches a robot.

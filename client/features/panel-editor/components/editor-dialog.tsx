@@ -1,4 +1,5 @@
-import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { useId, type ReactNode } from 'react';
+import { useModal } from '../../../components/ui/use-modal';
 import { cx } from '../../../lib/cx';
 
 type EditorDialogProps = {
@@ -17,14 +18,8 @@ const WIDTHS = { md: 'w-[min(34rem,calc(100vw-2rem))]', lg: 'w-[min(48rem,calc(1
 
 /** A modal of the designer (conflict, versions, contract). Escape closes it unless `canClose` is false. */
 export function EditorDialog({ isOpen, title, description, onClose, canClose = true, width = 'md', children, footer }: EditorDialogProps) {
-  const ref = useRef<HTMLDialogElement>(null);
+  const ref = useModal(isOpen);
   const titleId = useId();
-  useEffect(() => {
-    const dialog = ref.current;
-    if (!dialog) return;
-    if (isOpen && !dialog.open) dialog.showModal();
-    if (!isOpen && dialog.open) dialog.close();
-  }, [isOpen]);
   return (
     <dialog
       ref={ref}

@@ -1,5 +1,6 @@
-import { useEffect, useId, useRef, type FormEvent, type ReactNode } from 'react';
+import { useId, type FormEvent, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
+import { useModal } from '../../../components/ui/use-modal';
 
 type FormDialogProps = {
   isOpen: boolean;
@@ -16,18 +17,8 @@ type FormDialogProps = {
 
 /** A modal form: Enter submits, Escape or Cancel backs out, focus starts on the first field. */
 export function FormDialog({ isOpen, title, description, submitLabel, isPending, error, onSubmit, onCancel, children }: FormDialogProps) {
-  const ref = useRef<HTMLDialogElement>(null);
+  const ref = useModal(isOpen, (dialog) => dialog.querySelector<HTMLElement>('input, select, textarea')?.focus());
   const titleId = useId();
-
-  useEffect(() => {
-    const dialog = ref.current;
-    if (!dialog) return;
-    if (isOpen && !dialog.open) {
-      dialog.showModal();
-      dialog.querySelector<HTMLElement>('input, select, textarea')?.focus();
-    }
-    if (!isOpen && dialog.open) dialog.close();
-  }, [isOpen]);
 
   function submit(e: FormEvent) {
     e.preventDefault();

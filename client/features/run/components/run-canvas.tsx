@@ -1,7 +1,7 @@
-import { useLayoutEffect, useRef, useState } from 'react';
 import { fitScale, deviceSize } from '../../../../shared/domain/panels/grid';
 import type { ChannelValue } from '../../../../shared/protocol/messages';
 import type { PanelDocument, Page, Tile } from '../../../../shared/schemas/panel';
+import { useElementSize } from '../../../hooks/use-element-size';
 import { TileView, type TileLive, type TileSeat } from '../../../components/panel-tiles/tile-view';
 
 type RunCanvasProps = {
@@ -17,17 +17,7 @@ type RunCanvasProps = {
 
 /** The panel's page at the largest size that fits the space below the status strip, keeping the device's shape. */
 export function RunCanvas({ document, page, live, seat, isLinkDown, onPress, onRelease }: RunCanvasProps) {
-  const areaRef = useRef<HTMLDivElement>(null);
-  const [area, setArea] = useState({ widthPx: 0, heightPx: 0 });
-  useLayoutEffect(() => {
-    const el = areaRef.current;
-    if (!el) return;
-    const measure = () => setArea({ widthPx: el.clientWidth, heightPx: el.clientHeight });
-    measure();
-    const observer = new ResizeObserver(measure);
-    observer.observe(el);
-    return () => observer.disconnect();
-  }, []);
+  const [areaRef, area] = useElementSize<HTMLDivElement>();
   const screen = deviceSize(document.device);
   const scale = fitScale(document.device, area, true);
   const theme = document.theme;

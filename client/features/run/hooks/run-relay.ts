@@ -1,11 +1,9 @@
 import { useCallback, useEffect, useSyncExternalStore } from 'react';
 import type { ChannelValue } from '../../../../shared/protocol/messages';
-import type { SocketLike } from '../../../../shared/protocol/relay-link';
+import { browserRelayDeps } from '../../../hooks/use-relay';
 import { RelayClient, type PublishTicket, type RelayState } from '../../../lib/relay-client';
 
 let shared: RelayClient | undefined;
-
-const relayUrl = () => `${location.protocol === 'https:' ? 'wss' : 'ws'}://${location.host}/relay`;
 
 /**
  * Run mode's relay connection. It says hello as a `panel`, so the relay holds it to the panel stale limit
@@ -14,14 +12,7 @@ const relayUrl = () => `${location.protocol === 'https:' ? 'wss' : 'ws'}://${loc
  */
 export function runRelayClient(): RelayClient {
   shared ??= new RelayClient(
-    {
-      connect: () => new WebSocket(relayUrl()) as unknown as SocketLike,
-      now: () => performance.timeOrigin + performance.now(),
-      setTimer: (fn, ms) => window.setTimeout(fn, ms),
-      clearTimer: (handle) => window.clearTimeout(handle as number),
-      random: Math.random,
-      scheduleFlush: (fn) => requestAnimationFrame(() => fn()),
-    },
+    browserRelayDeps(),
     { hello: { kind: 'panel', name: 'Run mode tablet' }, heartbeatMs: 100, staleMs: 400, ackTimeoutMs: 1000, resendAfterReconnect: true },
   );
   return shared;
