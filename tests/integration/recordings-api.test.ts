@@ -7,6 +7,7 @@ import { ROLES, type Role } from '../../shared/domain/roles';
 import { DEFAULT_ROBOT_PROFILE } from '../../shared/domain/robot-profile';
 import { season2025 } from '../../shared/domain/season/season-2025';
 import { decodeRecording } from '../../shared/protocol/recording-file';
+import { samplesSchema } from '../../shared/schemas/recording';
 import { decodeTelemetry } from '../../shared/protocol/telemetry-codec';
 import { runHeadlessMatch, type HeadlessMatch } from '../../simulator/src/headless';
 import { encodeHeadlessMatch } from '../../simulator/src/match-file';
@@ -83,6 +84,7 @@ describe('upload a Pitwall recording and read it back', () => {
     for (const signal of [match.signals[0]!, match.signals[5]!, match.signals.at(-1)!]) {
       const res = await clients.coach.get(`/api/recordings/${recordingId}/samples`).query({ signal: signal.name }).expect(200);
       expect(res.body.signal).toBe(signal.name);
+      expect(samplesSchema.safeParse(res.body).success).toBe(true);
       expect(jsonBits(res.body.values)).toEqual(bits(column(signal.index)));
       expect(res.body.tS[1]).toBeCloseTo(0.02, 9);
     }
