@@ -14,6 +14,23 @@ export interface UserRow {
 }
 
 export function authRepo(db: Executor) {
+  const findActorStatement = db
+    .select({
+      userId: users.id,
+      email: users.email,
+      name: users.name,
+      sessionVersion: users.sessionVersion,
+      teamId: teams.id,
+      teamNumber: teams.number,
+      teamName: teams.name,
+      role: memberships.role,
+    })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .innerJoin(teams, eq(teams.id, memberships.teamId))
+    .where(eq(memberships.userId, sql.placeholder('userId')))
+    .limit(1)
+    .prepare('auth_find_actor');
   return {
     async findUserByEmail(email: string): Promise<UserRow | undefined> {
       const [row] = await db
@@ -24,20 +41,15 @@ export function authRepo(db: Executor) {
       return row;
     },
 
+    /** Every signed-in request asks this: a prepared statement, parsed and planned once per connection. */
     async findActor(userId: string): Promise<Actor | undefined> {
-      const [row] = await db
-        .select({ user: users, team: teams, role: memberships.role })
-        .from(memberships)
-        .innerJoin(users, eq(users.id, memberships.userId))
-        .innerJoin(teams, eq(teams.id, memberships.teamId))
-        .where(eq(memberships.userId, userId))
-        .limit(1);
+      const [row] = await findActorStatement.execute({ userId });
       if (!row) return undefined;
       return {
-        user: { id: row.user.id, email: row.user.email, name: row.user.name },
-        team: { id: row.team.id, number: row.team.number, name: row.team.name },
+        user: { id: row.userId, email: row.email, name: row.name },
+        team: { id: row.teamId, number: row.teamNumber, name: row.teamName },
         role: row.role,
-        sessionVersion: row.user.sessionVersion,
+        sessionVersion: row.sessionVersion,
       };
     },
 

@@ -87,6 +87,22 @@ describe('samplesJson', () => {
     expect(Object.is(parsed.values[0], -0)).toBe(true);
     expect(parsed.values[1]).toBeNull();
   });
+
+  it('writes typed arrays: non-finite float32 values as null, the rest back bit for bit through Math.fround', () => {
+    const values = Float32Array.from([1.1, NaN, -Infinity, 3.4028234663852886e38, 1.401298464324817e-45, -7.25]);
+    const parsed = JSON.parse(samplesJson({ signal: 's', tS: Float64Array.from([0, 0.02, 0.04, 0.06, 0.08, 0.1]), values }));
+    expect(parsed.tS).toEqual([0, 0.02, 0.04, 0.06, 0.08, 0.1]);
+    expect(parsed.values[1]).toBeNull();
+    expect(parsed.values[2]).toBeNull();
+    const back = Float32Array.from(parsed.values.map((v: number | null) => (v === null ? NaN : Math.fround(v))));
+    expect(bits(back).filter((_, i) => i !== 1 && i !== 2)).toEqual(bits(values).filter((_, i) => i !== 1 && i !== 2));
+  });
+
+  it('keeps -0 in a typed array too', () => {
+    const parsed = JSON.parse(samplesJson({ signal: 's', tS: Float64Array.from([0, 0.02]), values: Float32Array.from([2.5, -0]) }));
+    expect(parsed.values[0]).toBe(2.5);
+    expect(Object.is(parsed.values[1], -0)).toBe(true);
+  });
 });
 
 describe('recordingRecords', () => {

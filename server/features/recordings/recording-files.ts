@@ -245,10 +245,19 @@ const jsonNumber = (v: number | null) => (v === null || !Number.isFinite(v) ? 'n
 
 /**
  * The samples answer as JSON text, like JSON.stringify but keeping the sign of zero, so a client that reads
- * the values with Math.fround gets every finite sample back bit for bit.
+ * the values with Math.fround gets every finite sample back bit for bit. Takes the service's typed arrays
+ * (NaN and ±Infinity become null).
  */
-export function samplesJson(answer: { signal: string; tS: readonly number[]; values: readonly (number | null)[] }): string {
-  return `{"signal":${JSON.stringify(answer.signal)},"tS":[${answer.tS.map(jsonNumber).join(',')}],"values":[${answer.values.map(jsonNumber).join(',')}]}`;
+export function samplesJson(answer: { signal: string; tS: ArrayLike<number>; values: ArrayLike<number | null> }): string {
+  return `{"signal":${JSON.stringify(answer.signal)},"tS":${numbersJson(answer.tS)},"values":${numbersJson(answer.values)}}`;
+}
+
+/** V8's JSON.stringify writes a plain number array fastest (9,000 floats in ~1 ms), but writes -0 as 0. */
+function numbersJson(xs: ArrayLike<number | null>): string {
+  for (let i = 0; i < xs.length; i += 1) {
+    if (Object.is(xs[i], -0)) return `[${Array.from(xs, jsonNumber).join(',')}]`;
+  }
+  return JSON.stringify(Array.from(xs));
 }
 
 /**

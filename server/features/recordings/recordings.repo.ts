@@ -93,7 +93,37 @@ export interface SignalChunk extends Chunk {
 const buffer = (b: Uint8Array) => Buffer.from(b.buffer, b.byteOffset, b.byteLength);
 const lastTickMs = (c: Chunk) => (c.timesMs ? c.timesMs[c.ticks - 1]! : c.t0Ms + (c.ticks - 1) * c.dtMs);
 
+/** The columns of a chunk a read needs. */
+const CHUNK_COLUMNS = {
+  firstSeq: recordingChunks.firstSeq,
+  t0Ms: recordingChunks.t0Ms,
+  dtMs: recordingChunks.dtMs,
+  ticks: recordingChunks.ticks,
+  timesMs: recordingChunks.timesMs,
+  values: recordingChunks.values,
+};
+
 export function recordingsRepo(db: Executor) {
+  // The replay's hot path, one round trip: the recording (team checked), the signal by name and its chunks
+  // in the range (seconds from the origin; null for open ends), prepared once per connection.
+  const fromS = sql.placeholder('fromS');
+  const toS = sql.placeholder('toS');
+  const signalChunksStatement = db
+    .select({ originTMs: recordings.originTMs, signalIndex: recordingSignals.index, ...CHUNK_COLUMNS })
+    .from(recordings)
+    .leftJoin(recordingSignals, and(eq(recordingSignals.recordingId, recordings.id), eq(recordingSignals.name, sql.placeholder('signalName'))))
+    .leftJoin(
+      recordingChunks,
+      and(
+        eq(recordingChunks.recordingId, recordings.id),
+        eq(recordingChunks.signalIndex, recordingSignals.index),
+        sql`(${toS}::float8 is null or ${recordingChunks.t0Ms} <= ${recordings.originTMs} + ${toS}::float8 * 1000)`,
+        sql`(${fromS}::float8 is null or ${recordingChunks.tLastMs} >= ${recordings.originTMs} + ${fromS}::float8 * 1000)`,
+      ),
+    )
+    .where(and(eq(recordings.id, sql.placeholder('recordingId')), eq(recordings.teamId, sql.placeholder('teamId'))))
+    .orderBy(asc(recordingChunks.firstSeq))
+    .prepare('recordings_signal_chunks');
   return {
     async findByStream(teamId: string, streamId: string): Promise<RecordingRow | undefined> {
       const [row] = await db
@@ -228,14 +258,7 @@ export function recordingsRepo(db: Executor) {
     /** One signal's chunks in seq order, those overlapping [fromMs, toMs] (robot time) when given. */
     async readChunks(recordingId: string, signalIndex: number, range: { fromMs?: number; toMs?: number } = {}): Promise<Chunk[]> {
       const rows = await db
-        .select({
-          firstSeq: recordingChunks.firstSeq,
-          t0Ms: recordingChunks.t0Ms,
-          dtMs: recordingChunks.dtMs,
-          ticks: recordingChunks.ticks,
-          timesMs: recordingChunks.timesMs,
-          values: recordingChunks.values,
-        })
+        .select(CHUNK_COLUMNS)
         .from(recordingChunks)
         .where(
           and(
@@ -247,6 +270,28 @@ export function recordingsRepo(db: Executor) {
         )
         .orderBy(asc(recordingChunks.firstSeq));
       return rows.map((r) => ({ ...r, timesMs: r.timesMs ? unpackTimes(r.timesMs) : null }));
+    },
+
+    /**
+     * One signal's chunks by name, with the recording's origin, in one round trip (the replay's hot path):
+     * undefined when the team has no such recording, `signalIndex` undefined when it has no such signal.
+     * The range is in seconds from the origin, as the API takes it.
+     */
+    async readSignalChunks(
+      teamId: string,
+      recordingId: string,
+      signalName: string,
+      range: { fromS?: number; toS?: number } = {},
+    ): Promise<{ originTMs: number; signalIndex: number | undefined; chunks: Chunk[] } | undefined> {
+      const rows = await signalChunksStatement.execute({ teamId, recordingId, signalName, fromS: range.fromS ?? null, toS: range.toS ?? null });
+      const [first] = rows;
+      if (!first) return undefined;
+      const chunks: Chunk[] = [];
+      for (const r of rows) {
+        if (r.firstSeq === null) continue;
+        chunks.push({ firstSeq: r.firstSeq, t0Ms: r.t0Ms!, dtMs: r.dtMs!, ticks: r.ticks!, timesMs: r.timesMs ? unpackTimes(r.timesMs) : null, values: r.values! });
+      }
+      return { originTMs: first.originTMs, signalIndex: first.signalIndex ?? undefined, chunks };
     },
 
     /** Every chunk from the first one shorter than maxTicks on, for merging; locked until the transaction ends. */

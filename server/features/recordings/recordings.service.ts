@@ -7,7 +7,6 @@ import type {
   RecordingListQuery,
   RecordingPage,
   RecordingPatch,
-  SamplesAnswer,
   SamplesQuery,
 } from '../../../shared/schemas/recording';
 import type { Actor } from '../auth/actor';
@@ -56,7 +55,6 @@ export interface RecordingDownload {
   body: AsyncIterable<Uint8Array | string>;
 }
 
-const finiteOrNull = (v: number) => (Number.isFinite(v) ? v : null);
 const fileStem = (row: RecordingRow) =>
   `${row.robot.replace(/[^A-Za-z0-9_-]+/g, '-') || 'recording'}-${row.startedAt.toISOString().slice(0, 10)}-${row.id.slice(0, 8)}`;
 
@@ -96,9 +94,10 @@ export function createRecordingsService({ store, now, onFinished }: RecordingsSe
       });
     },
 
-    async samples(actor: Actor, id: string, query: SamplesQuery): Promise<SamplesAnswer> {
+    /** One signal's samples as typed arrays (the route writes them as `samplesSchema` JSON, non-finite as null). */
+    async samples(actor: Actor, id: string, query: SamplesQuery): Promise<{ signal: string } & Samples> {
       const { tS, values } = await this.readSamples(actor.team.id, id, query.signal, { fromS: query.from, toS: query.to });
-      return { signal: query.signal, tS: Array.from(tS), values: Array.from(values, finiteOrNull) };
+      return { signal: query.signal, tS, values };
     },
 
     async events(actor: Actor, id: string): Promise<RecordingEvent[]> {
@@ -286,15 +285,10 @@ export function createRecordingsService({ store, now, onFinished }: RecordingsSe
 
     /** One signal's samples with tS (seconds from the recording's origin) in [fromS, toS], both optional. */
     async readSamples(teamId: string, recordingId: string, signalName: string, range: { fromS?: number; toS?: number } = {}): Promise<Samples> {
-      const recording = await recordingOrThrow(teamId, recordingId);
-      const signal = (await store.listSignals(recordingId)).find((s) => s.name === signalName);
-      if (!signal) throw new AppError('not_found', `This recording has no signal ${signalName}`);
-      const originMs = recording.originTMs;
-      const chunks = await store.readChunks(recordingId, signal.index, {
-        fromMs: range.fromS === undefined ? undefined : originMs + range.fromS * 1000,
-        toMs: range.toS === undefined ? undefined : originMs + range.toS * 1000,
-      });
-      return sliceSamples(chunks, originMs, range);
+      const found = await store.readSignalChunks(teamId, recordingId, signalName, range);
+      if (!found) throw notFound('That recording');
+      if (found.signalIndex === undefined) throw new AppError('not_found', `This recording has no signal ${signalName}`);
+      return sliceSamples(found.chunks, found.originTMs, range);
     },
 
     listStoredSeqs: (recordingId: string) => store.listStoredSeqs(recordingId),
