@@ -1,5 +1,6 @@
 // Relay benchmarks of the relay issue, each against a raw baseline of the same run:
-//  1. tap → robot → ack round trip with 20 viewers and a 200-signal stream at 50 Hz, against a bare ws echo;
+//  1. tap → robot → ack round trip with 20 viewers and a 200-signal stream at 50 Hz, against a bare ws echo,
+//     and beside a bare four-hop forward chain (what the same hops cost with no relay work: its floor);
 //  2. fan-out of 200-signal batches at 50 Hz to 50 viewers (and one stuck viewer) for 60 s, with the server's
 //     CPU share;
 //  3. bytes on the wire per telemetry sample of the simulator's stream, against the field's bandwidth limit.
@@ -36,28 +37,66 @@ const summary = (xs: number[]) => {
 
 const ms = (v: number) => `${v.toFixed(3)} ms`.padStart(9);
 
+/** A client of a raw ws process: each round trip sends one small frame and waits for the next frame back. */
+function roundTripper(ws: WebSocket) {
+  const frame = encodeFrame({ type: 'publish', id: 1, channel: 'op/reef/level', value: 'L4' });
+  return () =>
+    new Promise<number>((resolve) => {
+      const t0 = performance.now();
+      ws.once('message', () => resolve(performance.now() - t0));
+      ws.send(frame);
+    });
+}
+
+/** Spawns a raw ws bench process and waits for its "ready" line. */
+async function spawnRaw(args: string[]) {
+  const child = spawn(process.execPath, ['--import', 'tsx', ...args], { cwd: PROJECT_ROOT, stdio: ['ignore', 'pipe', 'inherit'] });
+  await new Promise<void>((resolve) => child.stdout!.once('data', () => resolve()));
+  return {
+    async stop() {
+      child.kill('SIGTERM');
+      await new Promise((r) => child.once('exit', r));
+    },
+  };
+}
+
+interface RawBaseline {
+  roundTrip(): Promise<number>;
+  stop(): Promise<void>;
+}
+
 /** A bare ws echo server on loopback, in its own process like the relay, and a client of it: the raw baseline. */
-async function startEcho(): Promise<{ roundTrip(): Promise<number>; stop(): Promise<void> }> {
+async function startEcho(): Promise<RawBaseline> {
   const port = await freePort();
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(PROJECT_ROOT, 'server/bench/echo-server.ts'), String(port)], {
-    cwd: PROJECT_ROOT,
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
-  await new Promise<void>((resolve) => server.stdout!.once('data', () => resolve()));
+  const server = await spawnRaw([path.join(PROJECT_ROOT, 'server/bench/echo-server.ts'), String(port)]);
   const ws = new WebSocket(`ws://127.0.0.1:${port}`, { perMessageDeflate: false });
   await new Promise((r) => ws.once('open', r));
-  const frame = encodeFrame({ type: 'publish', id: 1, channel: 'op/reef/level', value: 'L4' });
   return {
-    roundTrip: () =>
-      new Promise<number>((resolve) => {
-        const t0 = performance.now();
-        ws.once('message', () => resolve(performance.now() - t0));
-        ws.send(frame);
-      }),
+    roundTrip: roundTripper(ws),
     async stop() {
       ws.close();
-      server.kill('SIGTERM');
-      await new Promise((r) => server.once('exit', r));
+      await server.stop();
+    },
+  };
+}
+
+/**
+ * The floor of any relay: a tap's four loopback hops (panel → relay → robot → relay → panel) through bare ws
+ * processes that only forward bytes. What the real tap costs above this is the relay's and clients' own work.
+ */
+async function startBareChain(): Promise<RawBaseline> {
+  const port = await freePort();
+  const script = path.join(PROJECT_ROOT, 'server/bench/bare-chain.ts');
+  const relay = await spawnRaw([script, 'relay', String(port)]);
+  const robot = await spawnRaw([script, 'robot', `ws://127.0.0.1:${port}`]);
+  const ws = new WebSocket(`ws://127.0.0.1:${port}/panel`, { perMessageDeflate: false });
+  await new Promise((r) => ws.once('open', r));
+  return {
+    roundTrip: roundTripper(ws),
+    async stop() {
+      ws.close();
+      await robot.stop();
+      await relay.stop();
     },
   };
 }
@@ -234,22 +273,24 @@ async function startRobot(server: BenchServer, key: string) {
   };
 }
 
-/** Times `count` round trips of `a` and of `b`, alternating; each resolves with its duration in ms. */
-async function interleaved(count: number, a: () => Promise<number>, b: () => Promise<number>) {
-  const as: number[] = [];
-  const bs: number[] = [];
+type Summary = ReturnType<typeof summary>;
+
+/** Times `count` round trips of each of `runs`, taking turns; each resolves with its duration in ms. */
+async function interleaved(count: number, runs: (() => Promise<number>)[]): Promise<Summary[]> {
+  const times = runs.map(() => [] as number[]);
   for (let i = 0; i < count; i += 1) {
-    as.push(await a());
-    await sleep(3);
-    bs.push(await b());
-    await sleep(3);
+    for (const [k, run] of runs.entries()) {
+      times[k]!.push(await run());
+      await sleep(3);
+    }
   }
-  return { a: summary(as), b: summary(bs) };
+  return times.map(summary);
 }
 
 export async function benchRelay(options: RelayBenchOptions): Promise<string[]> {
   const lines: string[] = [];
   const echo = await startEcho();
+  const chain = await startBareChain();
   const server = await startBenchServer(options.databaseUrl);
   try {
     const key = await createRobotKey(server.url);
@@ -265,23 +306,27 @@ export async function benchRelay(options: RelayBenchOptions): Promise<string[]> 
       const rev = await panel.publish((id += 1), 'op/reef/level', id % 2 ? 'L4' : 'L3');
       return (await panel.ackedAt(rev)) - t0;
     };
-    // Echo and tap alternate, so both meet the same moments of a noisy machine; the first 200 warm up.
-    await interleaved(200, echo.roundTrip, tapOnce);
+    // Echo, bare chain and tap take turns, so all meet the same moments of a noisy machine; 200 warm up.
+    const runs = [echo.roundTrip, chain.roundTrip, tapOnce];
+    await interleaved(200, runs);
     // Enough round trips that each p99 stands on 10 (quiet) and 20 (loaded) of the slowest, not 5.
-    const quiet = await interleaved(1000, echo.roundTrip, tapOnce);
+    const [quietEcho, quietChain, quietTap] = await interleaved(1000, runs);
     const load = await startLoad(server, viewerCookie, 20, 0);
     robot.stream();
     await sleep(500);
-    const loaded = await interleaved(2000, echo.roundTrip, tapOnce);
+    const [loadedEcho, loadedChain, loadedTap] = await interleaved(2000, runs);
     const viewerCounts = await load.report();
     await load.stop();
-    const row = (label: string, r: { p50: number; p99: number }) => `  ${label.padEnd(52)} p50 ${ms(r.p50)}   p99 ${ms(r.p99)}`;
-    lines.push(row('bare ws echo on loopback, quiet (baseline)', quiet.a));
-    lines.push(`${row('tap → robot → ack, quiet', quiet.b)}   p99 ${(quiet.b.p99 / quiet.a.p99).toFixed(2)}× the echo`);
-    lines.push(row('bare ws echo, with the load below (baseline)', loaded.a));
+    const row = (label: string, r: Summary, echoP99?: number) =>
+      `  ${label.padEnd(52)} p50 ${ms(r.p50)}   p99 ${ms(r.p99)}` + (echoP99 ? `   p99 ${(r.p99 / echoP99).toFixed(2)}× the echo` : '');
+    lines.push(row('bare ws echo on loopback, quiet (baseline)', quietEcho!));
+    lines.push(row('bare 4-hop forward chain, quiet (floor of a relay)', quietChain!, quietEcho!.p99));
+    lines.push(row('tap → robot → ack, quiet', quietTap!, quietEcho!.p99));
+    lines.push(row('bare ws echo, with the load below (baseline)', loadedEcho!));
+    lines.push(row('bare 4-hop forward chain, with the load', loadedChain!, loadedEcho!.p99));
     lines.push(
-      `${row('tap → robot → ack, 20 viewers + 200 signals @ 50 Hz', loaded.b)}   p99 ${(loaded.b.p99 / loaded.a.p99).toFixed(2)}× the echo ` +
-        `(target ≤ 2×; a tap is two round trips); viewers got ${Math.min(...viewerCounts)}–${Math.max(...viewerCounts)} batches`,
+      `${row('tap → robot → ack, 20 viewers + 200 signals @ 50 Hz', loadedTap!, loadedEcho!.p99)} (target ≤ 2×; ` +
+        `${(loadedTap!.p99 / loadedChain!.p99).toFixed(2)}× the bare chain); viewers got ${Math.min(...viewerCounts)}–${Math.max(...viewerCounts)} batches`,
     );
 
     const fan = await startLoad(server, viewerCookie, 50, 1);
@@ -307,6 +352,7 @@ export async function benchRelay(options: RelayBenchOptions): Promise<string[]> 
     await robot.stop();
   } finally {
     await server.stop();
+    await chain.stop();
     await echo.stop();
   }
   // Bytes on the wire for the simulator's own stream (one headless match, batches of 5 ticks).

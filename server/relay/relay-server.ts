@@ -18,6 +18,7 @@ import {
   type TelemetryBatch,
 } from '../../shared/protocol/messages';
 import type { Logger } from '../lib/logger';
+import { DeferredFlush } from './deferred-flush';
 import { DEFAULT_LIMITS, RelaySession, type SessionIdentity, type SessionLimits } from './session';
 import { STREAM_CHANNELS, TeamHub } from './team-hub';
 import type { DurableMessage, StreamObserver, StreamRef, TelemetryStore } from './telemetry-store';
@@ -68,6 +69,8 @@ export function createRelay(deps: RelayDeps): Relay {
   const log = deps.logger;
   const wss = new WebSocketServer({ noServer: true, maxPayload: maxFrameBytes * 4, perMessageDeflate: false });
   const hubs = new Map<string, TeamHub>();
+  // Fan-out to watchers, a few sockets per event-loop turn (see DeferredFlush).
+  const watcherWrites = new DeferredFlush();
   const streams = new Map<string, StreamState>();
 
   const hubFor = (teamId: string) => {
@@ -276,7 +279,7 @@ export function createRelay(deps: RelayDeps): Relay {
   }
 
   function accept(ws: WebSocket, principal: Principal): void {
-    const s = new RelaySession(ws, { ...principal, sessionId: randomUUID() }, limits, now);
+    const s = new RelaySession(ws, { ...principal, sessionId: randomUUID() }, limits, now, watcherWrites);
     const hub = hubFor(principal.teamId);
     hub.sessions.add(s);
     const helloTimer = setTimeout(() => {

@@ -4,6 +4,7 @@ import { ClockFilter, type ClockSample } from '../../shared/protocol/clock-sync'
 import { encodeFrame } from '../../shared/protocol/frame-codec';
 import { CLOSE, type ClientKind, type CloseCode, type RelayRole, type Sender, type ServerMessage } from '../../shared/protocol/messages';
 import { createBucket, takeToken, type TokenBucket } from '../../shared/protocol/token-bucket';
+import type { DeferredFlush } from './deferred-flush';
 
 export interface SessionIdentity {
   sessionId: string;
@@ -31,6 +32,12 @@ export interface SessionLimits {
 export const DEFAULT_LIMITS: SessionLimits = { ratePerS: 400, burst: 800, lossyQueue: 256, reliableQueue: 20_000, inFlight: 16 };
 
 export type Lane = 'reliable' | 'lossy';
+
+/**
+ * `now`: written at once (replies, pongs, an op/ value to a robot, an ack to its publisher). `soon`: fan-out to
+ * watchers, written a few sockets per event-loop turn. A session's frames keep their order either way.
+ */
+export type Urgency = 'now' | 'soon';
 
 export interface SessionStats {
   framesIn: number;
@@ -66,6 +73,7 @@ export class RelaySession {
     readonly identity: SessionIdentity,
     private readonly limits: SessionLimits,
     private readonly now: () => number,
+    private readonly deferred?: DeferredFlush,
   ) {
     this.connectedAtMs = now();
     this.lastFrameAtMs = this.connectedAtMs;
@@ -125,7 +133,7 @@ export class RelaySession {
   }
 
   /** Queues pre-encoded bytes (fan-out encodes once for every subscriber). */
-  sendBytes(bytes: Uint8Array, lane: Lane): void {
+  sendBytes(bytes: Uint8Array, lane: Lane, urgency: Urgency = 'now'): void {
     if (this.closed) return;
     if (lane === 'lossy') {
       this.lossy.push(bytes);
@@ -140,7 +148,8 @@ export class RelaySession {
         return;
       }
     }
-    this.pump();
+    if (urgency === 'soon' && this.deferred) this.deferred.add(this);
+    else this.flush();
   }
 
   close(code: CloseCode | 1000, reason: string): void {
@@ -164,7 +173,8 @@ export class RelaySession {
     this.lossy.length = 0;
   }
 
-  private pump(): void {
+  /** Hands queued frames to the socket, reliable first, up to the in-flight limit. */
+  flush(): void {
     while (!this.closed && this.inFlight < this.limits.inFlight) {
       const next = this.reliable.shift() ?? this.lossy.shift();
       if (!next) return;
@@ -173,7 +183,7 @@ export class RelaySession {
       this.stats.bytesOut += next.byteLength;
       this.ws.send(next, { binary: true }, () => {
         this.inFlight -= 1;
-        this.pump();
+        this.flush();
       });
     }
   }

@@ -63,13 +63,10 @@ export class TeamHub {
       robot: robot.identity.principal,
     };
     const bytes = encodeFrame(message);
+    // The publisher waits for this ack; the channel's other subscribers only watch.
     const publisher = [...this.sessions].find((s) => s.id === revision.publisherId);
-    const sent = new Set<RelaySession>();
-    if (publisher) {
-      publisher.sendBytes(bytes, 'reliable');
-      sent.add(publisher);
-    }
-    for (const s of this.subscribersOf(channel)) if (!sent.has(s)) s.sendBytes(bytes, 'reliable');
+    publisher?.sendBytes(bytes, 'reliable', 'now');
+    for (const s of this.subscribersOf(channel)) if (s !== publisher) s.sendBytes(bytes, 'reliable', 'soon');
     return message.relayRttMs;
   }
 
@@ -88,14 +85,16 @@ export class TeamHub {
     for (const prefix of prefixes) session.prefixes.delete(prefix);
   }
 
-  /** Encodes once and queues for every open subscriber of `channel`. */
+  /**
+   * Encodes once and queues for every open subscriber of `channel`. Robots act on op/ values, so theirs are
+   * written at once; panels and viewers only watch, so theirs are written a few sockets per turn after.
+   */
   fanout(channel: string, message: ServerMessage, lane: Lane, except?: RelaySession): void {
     const targets = this.subscribersOf(channel).filter((s) => s !== except);
     if (targets.length === 0) return;
-    // Robots act on op/ values: they get them before the panels and viewers that only watch.
-    if (channel.startsWith('op/')) targets.sort((a, b) => Number(b.kind === 'robot') - Number(a.kind === 'robot'));
     const bytes = encodeFrame(message);
-    for (const s of targets) s.sendBytes(bytes, lane);
+    const actsOnIt = channel.startsWith('op/');
+    for (const s of targets) s.sendBytes(bytes, lane, actsOnIt && s.kind === 'robot' ? 'now' : 'soon');
   }
 
   /** Sets a relay-owned sys/ value (rev counts like any other channel). */
