@@ -15,6 +15,7 @@ import { runMigrations } from '../db/migrate';
 import { readEnv } from '../env';
 import { createLogger } from '../lib/logger';
 import { provideDatabase } from '../runtime';
+import { ensureChromium } from '../../tests/support/ensure-chromium';
 
 // PITWALL_BENCH_ONLY=relay,cycles runs only those groups: auth, relay, storage, api (with the browser cases), cycles.
 const only = new Set((process.env.PITWALL_BENCH_ONLY ?? '').split(',').map((x) => x.trim()).filter(Boolean));
@@ -55,6 +56,7 @@ async function benchApiAndBrowser(): Promise<void> {
   const recordingsApi = await benchRecordingsApi({ databaseUrl: withDatabase(database.url, name), keepServer: true });
   process.stdout.write(`\nrecordings API\n${recordingsApi.lines.join('\n')}\n`);
   try {
+    ensureChromium();
     const replay = await benchReplayBrowser({ server: recordingsApi.server, recordingId: recordingsApi.recordingId });
     process.stdout.write(`\nreplay in the browser\n${replay.join('\n')}\n`);
     const designer = await benchPanelDesigner({ server: recordingsApi.server });

@@ -4,6 +4,7 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { PROJECT_ROOT } from '../../server/runtime';
+import { ensureChromium } from './ensure-chromium';
 
 const started = Date.now();
 const env = { ...process.env, NO_COLOR: '1', FORCE_COLOR: '0' };
@@ -21,25 +22,7 @@ function step(title: string, command: string, args: string[]): void {
   process.stdout.write(`== ${title}: ok in ${seconds} s\n`);
 }
 
-function ensureChromium(): void {
-  if (existsSync('/usr/bin/chromium')) return;
-  if (process.getuid?.() !== 0) {
-    process.stderr.write('Browser tests need Debian\'s Chromium: run `sudo apt-get install -y chromium` and try again.\n');
-    process.exit(1);
-  }
-  const apt = (args: string[]) =>
-    spawnSync('apt-get', ['-o', 'DPkg::Lock::Timeout=900', ...args], {
-      stdio: 'inherit',
-      env: { ...env, DEBIAN_FRONTEND: 'noninteractive' },
-    }).status === 0;
-  process.stdout.write('installing Debian\'s chromium for the browser tests (apt-get), once…\n');
-  if (!(apt(['update']) && apt(['install', '-y', 'chromium']))) {
-    process.stderr.write('apt-get could not install chromium.\n');
-    process.exit(1);
-  }
-}
-
-ensureChromium();
+ensureChromium(env);
 step('typecheck (tsc --noEmit)', process.execPath, [bin('typescript', 'bin/tsc'), '--noEmit', '-p', 'tsconfig.json']);
 step('client build (vite build)', process.execPath, [bin('vite', 'bin/vite.js'), 'build', '--logLevel', 'warn']);
 
