@@ -144,13 +144,16 @@ class Viewer {
 
   private arrived(key: string, rev: number): void {
     const hit = { atMs: performance.now(), rev };
-    this.seen.set(key, hit);
-    this.waiting.get(key)?.(hit);
+    const waiter = this.waiting.get(key);
     this.waiting.delete(key);
+    if (waiter) waiter(hit);
+    else this.seen.set(key, hit);
   }
 
+  /** Each arrival is taken once, so the maps stay small over thousands of taps (less garbage to collect). */
   private when(key: string): Promise<{ atMs: number; rev: number }> {
     const hit = this.seen.get(key);
+    this.seen.delete(key);
     if (hit) return Promise.resolve(hit);
     return new Promise((resolve) => this.waiting.set(key, resolve));
   }
