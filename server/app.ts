@@ -57,7 +57,7 @@ export interface AppDeps {
   /** Recorder timing (tests shorten the disconnect grace). */
   recorder?: Partial<Pick<RecorderOptions, 'graceMs' | 'tailMs' | 'autoGapMs' | 'preRollMs' | 'keepLiveSimulated'>>;
   /** Relay timing and limits (tests shorten them). */
-  relay?: Partial<Pick<RelayDeps, 'heartbeatMs' | 'staleMs' | 'viewerStaleMs' | 'maxFrameBytes' | 'limits' | 'helloTimeoutMs'>>;
+  relay?: Partial<Pick<RelayDeps, 'heartbeatMs' | 'viewerHeartbeatMs' | 'staleMs' | 'viewerStaleMs' | 'maxFrameBytes' | 'limits' | 'helloTimeoutMs'>>;
 }
 
 export interface App {

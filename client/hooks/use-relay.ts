@@ -1,6 +1,6 @@
 import { useCallback, useRef, useSyncExternalStore } from 'react';
 import type { ChannelValue } from '../../shared/protocol/messages';
-import type { SocketLike } from '../../shared/protocol/relay-link';
+import { WATCHER_LINK_TIMING, type SocketLike } from '../../shared/protocol/relay-link';
 import { RelayClient, type PublishTicket, type RelayClientDeps, type RelayState } from '../lib/relay-client';
 
 let shared: RelayClient | undefined;
@@ -25,7 +25,7 @@ export function relayClient(): RelayClient {
     browserRelayDeps(),
     // A browser tab is a viewer to the relay: it gets a longer stale limit, because browsers slow the
     // timers of a tab in the background. Its role, not its kind, decides what it may publish.
-    { hello: { kind: 'viewer', name: 'Live page' }, heartbeatMs: 250, staleMs: 1500 },
+    { hello: { kind: 'viewer', name: 'Live page' }, ...WATCHER_LINK_TIMING },
   );
   return shared;
 }

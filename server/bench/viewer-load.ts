@@ -3,7 +3,7 @@
 import { parseArgs } from 'node:util';
 import { WebSocket } from 'ws';
 import { encodeFrame } from '../../shared/protocol/frame-codec';
-import { RelayLink, type SocketLike } from '../../shared/protocol/relay-link';
+import { RelayLink, WATCHER_LINK_TIMING, type SocketLike } from '../../shared/protocol/relay-link';
 
 const { values } = parseArgs({
   options: {
@@ -27,7 +27,8 @@ const links = counts.map(
         clearTimer: (h) => clearTimeout(h as NodeJS.Timeout),
         random: Math.random,
       },
-      { hello: { kind: 'viewer', name: `load viewer ${i}` } },
+      // Timed as the app's live page is.
+      { hello: { kind: 'viewer', name: `load viewer ${i}` }, ...WATCHER_LINK_TIMING },
       {
         onOpen: () => links[i]!.send({ type: 'subscribe', prefixes: ['robot/', 'op/'] }),
         onMessage: (m) => {

@@ -37,6 +37,8 @@ export interface RelayDeps {
   now?: () => number;
   limits?: Partial<SessionLimits>;
   heartbeatMs?: number;
+  /** Viewers and recorders only watch: they are pinged this often (and told so in their welcome). */
+  viewerHeartbeatMs?: number;
   /** Robots and panels are closed after this long without a frame. */
   staleMs?: number;
   /** Viewers and recorders get longer: a browser throttles the timers of a tab in the background. */
@@ -63,7 +65,10 @@ export function createRelay(deps: RelayDeps): Relay {
   const heartbeatMs = deps.heartbeatMs ?? 100;
   const staleMs = deps.staleMs ?? 400;
   const viewerStaleMs = deps.viewerStaleMs ?? 5000;
-  const staleLimit = (s: RelaySession) => (s.kind === 'viewer' || s.kind === 'recorder' ? viewerStaleMs : staleMs);
+  const viewerHeartbeatMs = deps.viewerHeartbeatMs ?? 500;
+  const watches = (s: RelaySession) => s.kind === 'viewer' || s.kind === 'recorder';
+  const staleLimit = (s: RelaySession) => (watches(s) ? viewerStaleMs : staleMs);
+  const heartbeatFor = (s: RelaySession) => (watches(s) ? viewerHeartbeatMs : heartbeatMs);
   const maxFrameBytes = deps.maxFrameBytes ?? 256 * 1024;
   const helloTimeoutMs = deps.helloTimeoutMs ?? 2000;
   const log = deps.logger;
@@ -202,7 +207,7 @@ export function createRelay(deps: RelayDeps): Relay {
       role: s.role,
       teamNumber: s.identity.teamNumber,
       serverTimeMs: now(),
-      heartbeatMs,
+      heartbeatMs: heartbeatFor(s),
       staleMs: staleLimit(s),
       maxFrameBytes,
     });
@@ -314,7 +319,10 @@ export function createRelay(deps: RelayDeps): Relay {
           s.close(CLOSE.stale, 'stale: no frame within the stale limit');
           continue;
         }
-        if (s.hasHello) s.send({ type: 'ping', t1: t }, 'reliable');
+        if (s.hasHello && t - s.lastPingAtMs >= heartbeatFor(s) - heartbeatMs / 2) {
+          s.lastPingAtMs = t;
+          s.send({ type: 'ping', t1: t }, 'reliable');
+        }
       }
     }
   }, heartbeatMs);

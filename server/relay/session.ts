@@ -56,6 +56,8 @@ export class RelaySession {
   readonly prefixes = new Set<string>();
   readonly connectedAtMs: number;
   lastFrameAtMs: number;
+  /** When the relay last pinged this client. */
+  lastPingAtMs = Number.NEGATIVE_INFINITY;
   /** Client time minus server time (RFC 5905 estimate from the relay's pings), once measured. */
   offsetMs = 0;
   rttMs: number | undefined;

@@ -42,6 +42,12 @@ export interface LinkOptions {
   backoffMaxMs?: number;
 }
 
+/**
+ * How a watching client (the app's live pages) keeps its link: it pings every 250 ms and calls the link
+ * dead after 1.5 s without a relay frame (the relay pings watchers every 500 ms).
+ */
+export const WATCHER_LINK_TIMING = { heartbeatMs: 250, staleMs: 1500 } as const;
+
 const OPEN = 1;
 /** Close codes after which trying again cannot help. */
 const FINAL: readonly number[] = [CLOSE.unauthenticated, CLOSE.versionMismatch, CLOSE.revoked];

@@ -189,6 +189,34 @@ describe('stale detection', () => {
     expect(afterMs).toBeLessThan(600);
   });
 
+  it('pings robots and panels every 100 ms and watchers every 500 ms, as each one\'s welcome says', async () => {
+    const listen = async (kind: 'panel' | 'viewer') => {
+      const ws = await rawSocket(url, { cookie: cookies.coach, origin: server.url });
+      const frames: ServerMessage[] = [];
+      ws.on('message', (data) => {
+        const decoded = decodeServerFrame(new Uint8Array(data as Buffer));
+        if (!decoded.ok) return;
+        frames.push(decoded.message);
+        // Answer pings, so the panel (stale after 400 ms) stays connected.
+        if (decoded.message.type === 'ping') ws.send(encodeFrame({ type: 'pong', t1: decoded.message.t1, t2: Date.now(), t3: Date.now() }));
+      });
+      ws.send(encodeFrame({ type: 'hello', v: PROTOCOL_VERSION, kind, name: `${kind} listening` }));
+      return { ws, frames };
+    };
+    const panel = await listen('panel');
+    const viewer = await listen('viewer');
+    await new Promise((r) => setTimeout(r, 1600));
+    const welcome = (frames: ServerMessage[]) => frames.find(isType('welcome'))!;
+    expect(welcome(panel.frames)).toMatchObject({ heartbeatMs: 100, staleMs: 400 });
+    expect(welcome(viewer.frames)).toMatchObject({ heartbeatMs: 500, staleMs: 5000 });
+    const pings = (frames: ServerMessage[]) => frames.filter(isType('ping')).length;
+    expect(pings(panel.frames)).toBeGreaterThanOrEqual(12);
+    expect(pings(viewer.frames)).toBeGreaterThanOrEqual(2);
+    expect(pings(viewer.frames)).toBeLessThanOrEqual(4);
+    panel.ws.close();
+    viewer.ws.close();
+  });
+
   it('lets the client side notice a relay that stops answering', async () => {
     const op = await person('operator');
     const before = op.statuses.length;
