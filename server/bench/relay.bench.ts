@@ -65,19 +65,24 @@ interface RawBaseline {
   stop(): Promise<void>;
 }
 
-/** A bare ws echo server on loopback, in its own process like the relay, and a client of it: the raw baseline. */
-async function startEcho(): Promise<RawBaseline> {
-  const port = await freePort();
-  const server = await spawnRaw([path.join(PROJECT_ROOT, 'server/bench/echo-server.ts'), String(port)]);
-  const ws = new WebSocket(`ws://127.0.0.1:${port}`, { perMessageDeflate: false });
+/** A client of `url` timing round trips; stopping it closes the client, then `processes` in order. */
+async function rawBaseline(url: string, processes: { stop(): Promise<void> }[]): Promise<RawBaseline> {
+  const ws = new WebSocket(url, { perMessageDeflate: false });
   await new Promise((r) => ws.once('open', r));
   return {
     roundTrip: roundTripper(ws),
     async stop() {
       ws.close();
-      await server.stop();
+      for (const p of processes) await p.stop();
     },
   };
+}
+
+/** A bare ws echo server on loopback, in its own process like the relay, and a client of it: the raw baseline. */
+async function startEcho(): Promise<RawBaseline> {
+  const port = await freePort();
+  const server = await spawnRaw([path.join(PROJECT_ROOT, 'server/bench/echo-server.ts'), String(port)]);
+  return rawBaseline(`ws://127.0.0.1:${port}`, [server]);
 }
 
 /**
@@ -89,16 +94,7 @@ async function startBareChain(): Promise<RawBaseline> {
   const script = path.join(PROJECT_ROOT, 'server/bench/bare-chain.ts');
   const relay = await spawnRaw([script, 'relay', String(port)]);
   const robot = await spawnRaw([script, 'robot', `ws://127.0.0.1:${port}`]);
-  const ws = new WebSocket(`ws://127.0.0.1:${port}/panel`, { perMessageDeflate: false });
-  await new Promise((r) => ws.once('open', r));
-  return {
-    roundTrip: roundTripper(ws),
-    async stop() {
-      ws.close();
-      await robot.stop();
-      await relay.stop();
-    },
-  };
+  return rawBaseline(`ws://127.0.0.1:${port}/panel`, [robot, relay]);
 }
 
 async function createRobotKey(url: string): Promise<string> {
